@@ -1,0 +1,6 @@
+/**
+ * (module under construction)
+ *
+ * @module friction
+ */
+export {};

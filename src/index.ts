@@ -1,0 +1,12 @@
+/**
+ * headflow: pump selection for piping systems, with physical units checked by the type
+ * system. Every module's public names, flat. Subpaths (`headflow/units`, ...) give the same
+ * names module by module.
+ *
+ * @packageDocumentation
+ */
+export { HeadflowError, type HeadflowErrorCode, type HeadflowErrorDetails } from './errors';
+export * from './fluids/index';
+export * from './friction/index';
+export * from './pipes/index';
+export * from './units/index';

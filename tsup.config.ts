@@ -1,0 +1,18 @@
+import { defineConfig } from 'tsup';
+import { publicModules } from './scripts/modules';
+
+/** One entry for the root barrel and one per public module (see package.json "exports"). */
+const entry: Record<string, string> = { index: 'src/index.ts' };
+for (const name of publicModules) entry[`${name}/index`] = `src/${name}/index.ts`;
+
+export default defineConfig({
+  entry,
+  format: ['esm', 'cjs'],
+  dts: true,
+  clean: true,
+  sourcemap: true,
+  splitting: true,
+  treeshake: true,
+  target: 'es2022',
+  outDir: 'dist',
+});
