@@ -1,6 +1,16 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
+const src = fileURLToPath(new URL('./src/', import.meta.url));
+
 export default defineConfig({
+  resolve: {
+    // Examples and docs import 'headflow' as users do; in tests that name is the source tree.
+    alias: [
+      { find: /^headflow$/, replacement: `${src}index.ts` },
+      { find: /^headflow\/(.+)$/, replacement: `${src}$1/index.ts` },
+    ],
+  },
   test: {
     include: ['tests/**/*.test.ts'],
     typecheck: {

@@ -1,0 +1,44 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { publicModules } from '../scripts/modules';
+
+interface PackageJson {
+  readonly name: string;
+  readonly type: string;
+  readonly sideEffects: boolean;
+  readonly dependencies?: Record<string, string>;
+  readonly engines: { readonly node: string };
+  readonly exports: Record<string, unknown>;
+  readonly files: readonly string[];
+}
+
+const pkg = JSON.parse(
+  readFileSync(new URL('../package.json', import.meta.url), 'utf8'),
+) as PackageJson;
+
+describe('package.json', () => {
+  it('is the headflow ESM package with no runtime dependency and no side effects', () => {
+    expect(pkg.name).toBe('headflow');
+    expect(pkg.type).toBe('module');
+    expect(pkg.sideEffects).toBe(false);
+    expect(pkg.dependencies ?? {}).toEqual({});
+    expect(pkg.engines.node).toBe('>=20');
+    expect(pkg.files).toContain('dist');
+  });
+
+  it('exports the root and exactly one subpath per public module, each with ESM and CJS types', () => {
+    const subpaths = Object.keys(pkg.exports).filter((k) => k !== '.' && k !== './package.json');
+    expect(subpaths.sort()).toEqual(publicModules.map((m) => `./${m}`).sort());
+    for (const m of publicModules) {
+      expect(pkg.exports[`./${m}`]).toEqual({
+        import: { types: `./dist/${m}/index.d.ts`, default: `./dist/${m}/index.js` },
+        require: { types: `./dist/${m}/index.d.cts`, default: `./dist/${m}/index.cjs` },
+      });
+    }
+  });
+
+  it('re-exports every public module from the root barrel', () => {
+    const root = readFileSync(new URL('../src/index.ts', import.meta.url), 'utf8');
+    for (const m of publicModules) expect(root).toContain(`export * from './${m}/index';`);
+  });
+});
