@@ -1,0 +1,150 @@
+/**
+ * Pipe wall materials: equivalent sand-grain roughness and Hazen-Williams C, typed in from
+ * the sources named in each row (values in the source's own unit). Not generated.
+ *
+ * Sources (short names used in the rows):
+ * - MOODY-1944: L. F. Moody, "Friction factors for pipe flow", Transactions of the ASME 66
+ *   (1944) 671-684, Fig. 1 (roughness in feet for new, clean pipe). The same figures are
+ *   reproduced by efunda ("Absolute Pipe Roughness", after Binder 1973) and piping-designer.
+ * - HRW-TABLE-5: table "Colebrook-White roughness values", Table 5, columns Good (up to 20
+ *   years of use) / Normal (40 to 50 years) / Poor (80 to 100 years), in mm, as reproduced
+ *   in the document "Colebrook-White Roughness Values" (scribd 606782106). The table is the
+ *   one of the HR Wallingford "Tables for the hydraulic design of pipes, sewers and channels"
+ *   (attribution from memory).
+ * - FGO-5.1: N. K. Shammas and L. K. Wang, "Fair, Geyer, and Okun's Water and Wastewater
+ *   Engineering: Water Supply and Wastewater Removal", 3rd ed., Wiley 2011, Table 5.1
+ *   "Values of the Hazen-Williams coefficient C for different conduit materials and age of
+ *   conduit" (columns New / Uncertain).
+ * - ETB-HW: Engineering ToolBox, "Hazen-Williams Coefficients" (table of C by material).
+ * - LMNO-HW: LMNO Engineering, "Table of Hazen-Williams Coefficients".
+ *
+ * @module
+ */
+
+/** Names of the materials in the table. */
+export type MaterialName =
+  | 'commercial-steel'
+  | 'galvanized-steel'
+  | 'cast-iron'
+  | 'ductile-iron-cement-lined'
+  | 'copper'
+  | 'pvc'
+  | 'polyethylene'
+  | 'concrete';
+
+/** One material as typed in: lengths in `unit`. */
+export interface MaterialRow {
+  readonly name: MaterialName;
+  readonly description: string;
+  readonly unit: 'ft' | 'mm';
+  /** Roughness of new, clean pipe in `unit`. */
+  readonly roughness: number;
+  /** Range for new pipe where the source prints a range, in `unit`. */
+  readonly roughnessRange?: readonly [number, number];
+  /** Range for aged pipe in mm, where a source gives one. */
+  readonly agedRoughnessMm?: readonly [number, number];
+  readonly hazenWilliamsC: number;
+  readonly agedHazenWilliamsC?: number;
+  readonly sources: readonly string[];
+}
+
+export const MATERIALS: readonly MaterialRow[] = [
+  {
+    name: 'commercial-steel',
+    description: 'commercial (welded or seamless) carbon steel, unlined',
+    unit: 'ft',
+    roughness: 0.00015,
+    agedRoughnessMm: [0.15, 0.3],
+    hazenWilliamsC: 140,
+    agedHazenWilliamsC: 100,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'commercial steel or wrought iron' 0.00015 ft",
+      "aged roughness: HRW-TABLE-5 'Rusty steel', Normal 0.15 mm to Poor 0.3 mm",
+      "C: FGO-5.1 'Steel, welded joints, coated', New 140, Uncertain age 100",
+    ],
+  },
+  {
+    name: 'galvanized-steel',
+    description: 'galvanised steel or iron',
+    unit: 'ft',
+    roughness: 0.0005,
+    agedRoughnessMm: [0.15, 0.3],
+    hazenWilliamsC: 120,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'galvanized iron' 0.0005 ft",
+      "aged roughness: HRW-TABLE-5 'Galvanised iron, coated cast iron generally', Normal 0.15 mm to Poor 0.3 mm",
+      "C: ETB-HW 'Galvanized iron' 120; LMNO-HW 'Galvanized iron' 120",
+    ],
+  },
+  {
+    name: 'cast-iron',
+    description: 'cast iron, unlined',
+    unit: 'ft',
+    roughness: 0.00085,
+    agedRoughnessMm: [0.3, 0.6],
+    hazenWilliamsC: 130,
+    agedHazenWilliamsC: 100,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'cast iron' 0.00085 ft",
+      "aged roughness: HRW-TABLE-5 'Uncoated cast iron', Normal 0.3 mm to Poor 0.6 mm (tuberculated mains can be far rougher: same table, 'Old tuberculated water mains')",
+      "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100; LMNO-HW 'Cast-Iron, New, unlined' 130",
+    ],
+  },
+  {
+    name: 'ductile-iron-cement-lined',
+    description: 'ductile iron with spun cement-mortar lining',
+    unit: 'mm',
+    roughness: 0.03,
+    hazenWilliamsC: 140,
+    sources: [
+      "roughness: HRW-TABLE-5 'Spun bitumen or concrete lined', Normal 0.03 mm (the only column printed)",
+      "C: ETB-HW 'Cast-Iron, cement lined' 140; AWWA M41 Ductile-Iron Pipe and Fittings gives C = 140 for cement-mortar lined pipe (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
+    ],
+  },
+  {
+    name: 'copper',
+    description: 'copper, drawn tubing',
+    unit: 'ft',
+    roughness: 0.000005,
+    hazenWilliamsC: 130,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft",
+      "C: ETB-HW 'Copper' 130 - 140 and LMNO-HW 'Copper' 130-140; the table keeps the lower end (more head loss)",
+    ],
+  },
+  {
+    name: 'pvc',
+    description: 'PVC (unplasticised polyvinyl chloride)',
+    unit: 'ft',
+    roughness: 0.000005,
+    hazenWilliamsC: 150,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft, the class piping-designer lists as 'Drawn tubing (glass, brass, plastic)'",
+      "C: ETB-HW 'Polyvinyl chloride, PVC, CPVC' 150 (FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe')",
+    ],
+  },
+  {
+    name: 'polyethylene',
+    description: 'polyethylene (PE, HDPE)',
+    unit: 'ft',
+    roughness: 0.000005,
+    hazenWilliamsC: 140,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic, as for pvc)",
+      "C: ETB-HW 'Polyethylene, PE, PEH' 140",
+    ],
+  },
+  {
+    name: 'concrete',
+    description: 'concrete; roughness depends strongly on finish',
+    unit: 'ft',
+    roughness: 0.001,
+    roughnessRange: [0.001, 0.01],
+    hazenWilliamsC: 140,
+    agedHazenWilliamsC: 130,
+    sources: [
+      "roughness: MOODY-1944 Fig. 1, 'concrete' 0.001 to 0.01 ft; the table keeps the smooth end as the single value and gives the range",
+      "C: FGO-5.1 'Concrete', New 140, Uncertain age 130",
+    ],
+  },
+];
