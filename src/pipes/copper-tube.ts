@@ -30,7 +30,8 @@ export const COPPER_TUBE_SIZES: readonly string[] = COPPER_TUBE.map((r) => r.siz
  *   (`0.75`); DN is not used for copper tube
  * @param type - `'K'`, `'L'` or `'M'`
  * @returns the dimensions in metres, `standard: 'ASTM B88 Table 1'`
- * @throws HeadflowError `INVALID_ARGUMENT` for input that is not a size, `OUT_OF_RANGE` for a
+ * @throws HeadflowError `INVALID_ARGUMENT` for input that is not a size (DN included),
+ *   `OUT_OF_RANGE` for a
  *   size not served or a type B88 does not list at that size (the message lists those it
  *   does), `UNKNOWN_NAME` for a type other than K, L, M.
  * @example
@@ -40,7 +41,7 @@ export const COPPER_TUBE_SIZES: readonly string[] = COPPER_TUBE.map((r) => r.siz
  * ```
  */
 export function copperTube(size: string | number, type: CopperTubeType): PipeDimensions {
-  const s = resolveNominalSize(size, 'size');
+  const s = resolveNominalSize(size, 'size', false);
   const r = s === undefined ? undefined : BY_SIZE.get(s.nps);
   if (r === undefined) {
     throw argumentError(

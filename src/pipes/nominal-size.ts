@@ -61,6 +61,7 @@ function parseTradeNotation(text: string): number {
 export function resolveNominalSize(
   nps: unknown,
   parameter: string,
+  allowDn = true,
 ): { readonly nps: string; readonly dn: number | undefined; readonly inches: number } | undefined {
   let inches: number;
   let dn: number | undefined;
@@ -72,18 +73,20 @@ export function resolveNominalSize(
   } else if (typeof nps === 'string') {
     const text = nps.trim();
     const dnMatch = /^DN\s?(\d+)$/i.exec(text);
-    if (dnMatch) {
+    if (dnMatch && allowDn) {
       dn = Number(dnMatch[1]);
       inches = Number.NaN;
     } else {
       inches = parseTradeNotation(text);
-      if (!(inches > 0)) {
+      if (!(inches > 0 && Number.isFinite(inches))) {
         throw argumentError(
           'INVALID_ARGUMENT',
           parameter,
           nps,
           undefined,
-          "trade notation such as '1/2', '1-1/4', '2', a number of inches, or 'DN50'",
+          allowDn
+            ? "trade notation such as '1/2', '1-1/4', '2', a number of inches, or 'DN50'"
+            : "trade notation such as '1/2', '1-1/4', '2', or a number of inches",
         );
       }
     }
