@@ -24,10 +24,14 @@ const N10 = 0.65017534844798e3;
 export const SATURATION_T_MIN = 273.15;
 /** Critical temperature, 647.096 K (IF97 Eq. 3): upper bound of region 4. */
 export const SATURATION_T_MAX = 647.096;
-/** Saturation pressure at 273.15 K, 611.213 Pa (IF97 Section 8.1), lower bound of region 4. */
-export const SATURATION_P_MIN = 611.213;
-/** Critical pressure, 22.064 MPa (IF97 Eq. 4): upper bound of region 4. */
-export const SATURATION_P_MAX = 22.064e6;
+
+/**
+ * Lower pressure bound of region 4: Eq. (30) at 273.15 K, 611.2127 Pa (the release rounds it
+ * to 611.213 Pa). Computed so that Eqs. (30) and (31) are inverse over the whole range.
+ */
+export const SATURATION_P_MIN: number = saturationPressureSI(SATURATION_T_MIN);
+/** Upper pressure bound of region 4: Eq. (30) at 647.096 K, the critical pressure 22.064 MPa. */
+export const SATURATION_P_MAX: number = saturationPressureSI(SATURATION_T_MAX);
 
 /**
  * Saturation pressure (Pa) at a temperature (K) from IF97 Eq. (30); plain numbers, no checks,
@@ -113,7 +117,7 @@ export function waterSaturationPressure(temperature: Temperature): Pressure {
  * It is the exact algebraic inverse of Eq. (30); the two agree to rounding error (better
  * than 1e-9 relative over the whole range).
  *
- * Validity: 611.213 Pa <= p <= 22.064 MPa (absolute). Reproduces IF97 Table 36 to its nine
+ * Validity: 611.2127 Pa (p_s at 273.15 K) <= p <= 22.064 MPa (absolute). Reproduces IF97 Table 36 to its nine
  * printed digits.
  *
  * Source: IAPWS R7-97(2012), Section 8.2.
@@ -121,7 +125,7 @@ export function waterSaturationPressure(temperature: Temperature): Pressure {
  * @param pressure - absolute pressure (Pa)
  * @returns saturation temperature (K)
  * @throws HeadflowError `INVALID_ARGUMENT` for NaN, infinity or a negative pressure;
- *   `OUT_OF_RANGE` below 611.213 Pa or above 22.064 MPa.
+ *   `OUT_OF_RANGE` below 611.2127 Pa or above 22.064 MPa.
  * @example
  * ```ts
  * waterSaturationTemperature(q(0.1, 'MPa')); // 372.755919...(K), IF97 Table 36
@@ -139,7 +143,7 @@ export function waterSaturationTemperature(pressure: Pressure): Temperature {
       'pressure',
       pressure,
       'Pa',
-      '611.213 Pa to 22.064 MPa absolute (IAPWS-IF97 region 4)',
+      '611.2127 Pa to 22.064 MPa absolute (IAPWS-IF97 region 4, ice point to critical point)',
     );
   }
   return saturationTemperatureSI(pressure) as Temperature;

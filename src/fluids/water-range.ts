@@ -6,7 +6,7 @@
  */
 import { argumentError, HeadflowError } from '../errors';
 import { showPressure, showTemperature } from './checks';
-import { saturationPressureSI, saturationTemperatureSI } from './if97-region4';
+import { SATURATION_P_MIN, saturationPressureSI, saturationTemperatureSI } from './if97-region4';
 
 /** Lower temperature bound of IF97 region 1 (and of headflow's liquid water), 273.15 K. */
 export const WATER_T_MIN = 273.15;
@@ -73,7 +73,7 @@ export function checkLiquidWater(temperature: number, pressure: number, index = 
   }
   if (pressure < P_SAT_AT_T_MAX) {
     // Below the saturation pressure of 623.15 K the pressure has a boiling point in range.
-    const boiling = pressure < 611.213 ? 0 : saturationTemperatureSI(pressure);
+    const boiling = pressure < SATURATION_P_MIN ? 0 : saturationTemperatureSI(pressure);
     if (temperature >= boiling) {
       const needed = saturationPressureSI(temperature);
       throw new HeadflowError(

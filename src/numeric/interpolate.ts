@@ -62,7 +62,7 @@ function sign(v: number): number {
  * ```ts
  * const f = monotoneCubic([0, 1, 2], [0, 1, 4]);
  * f.evaluate(1); // 1
- * f.evaluate(1.5); // 2.375
+ * f.evaluate(1.5); // 2.25
  * ```
  */
 export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): MonotoneCubic {
