@@ -1,0 +1,37 @@
+/**
+ * Close-name suggestions for unknown catalogue ids.
+ * @internal
+ */
+
+/** Levenshtein edit distance between two short strings. */
+export function editDistance(a: string, b: string): number {
+  const row = new Array<number>(b.length + 1);
+  for (let j = 0; j <= b.length; j++) row[j] = j;
+  for (let i = 1; i <= a.length; i++) {
+    let diagonal = row[0] ?? 0;
+    row[0] = i;
+    for (let j = 1; j <= b.length; j++) {
+      const above = row[j] ?? 0;
+      const cost = a.charCodeAt(i - 1) === b.charCodeAt(j - 1) ? 0 : 1;
+      row[j] = Math.min(above + 1, (row[j - 1] ?? 0) + 1, diagonal + cost);
+      diagonal = above;
+    }
+  }
+  return row[b.length] ?? 0;
+}
+
+/**
+ * Up to `limit` names from `names` closest to `wanted`: those that contain every word of
+ * `wanted` come first, then the smallest edit distances.
+ */
+export function closeNames(wanted: string, names: readonly string[], limit = 5): string[] {
+  const w = wanted.toLowerCase().trim();
+  const words = w.split(/[^a-z0-9]+/).filter((x) => x.length > 1);
+  const scored = names.map((name) => {
+    const containsAll = words.length > 0 && words.every((x) => name.includes(x));
+    const shared = words.filter((x) => name.includes(x)).length;
+    return { name, score: (containsAll ? 0 : 1000) - 10 * shared + editDistance(w, name) };
+  });
+  scored.sort((p, q) => p.score - q.score || (p.name < q.name ? -1 : 1));
+  return scored.slice(0, limit).map((s) => s.name);
+}
