@@ -60,6 +60,10 @@ describe('special values and bad input', () => {
       expect(err.allowed).toContain("'24'");
     }
     expectHeadflowError(() => steelSchedules('30'), 'OUT_OF_RANGE');
+    const num = expectHeadflowError(() => steelSchedules(30), 'OUT_OF_RANGE');
+    expect(num.unit).toBe('in');
+    expect(expectHeadflowError(() => pvcPipe(30, '40'), 'OUT_OF_RANGE').unit).toBe('in');
+    expect(expectHeadflowError(() => copperTube(7, 'K'), 'OUT_OF_RANGE').unit).toBe('in');
     expectHeadflowError(() => pvcPipe('14', '40'), 'OUT_OF_RANGE');
     expectHeadflowError(() => copperTube('8', 'K'), 'OUT_OF_RANGE');
     expectHeadflowError(() => copperTube('DN50', 'K'), 'INVALID_ARGUMENT');

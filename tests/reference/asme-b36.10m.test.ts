@@ -138,7 +138,7 @@ describe('ASME B36.10M Table 1: walls in mm', () => {
 describe('ASME B36.10M: the one mm figure that is not the rounded inch figure', () => {
   it('NPS 1-1/2 XXS: 0.400 in holds; the mm column prints 10.15 (0.400 x 25.4 = 10.16)', () => {
     // Both reproductions print 10.15 mm. The module keeps the inch figure, which is the
-    // standard's primary unit for NPS sizes; the 0.01 mm difference is recorded here.
+    // unit this module stores; the 0.01 mm difference is recorded here.
     expectAbsolute(to(pipeSize('1-1/2', 'XXS').wallThickness, 'in'), 0.4, 1e-12);
     expectAbsolute(to(pipeSize('1-1/2', 'XXS').wallThickness, 'mm'), 10.15, 0.0101);
   });
