@@ -73,7 +73,7 @@ describe('colebrook against a 45-digit decimal.js solution', () => {
     }
     // Observed: about 1.3e-15 (two correction steps suffice at every corner).
     expect(worst).toBeLessThan(TOL);
-  });
+  }, 60_000);
 
   it('matches over 3000 random points across Re 2e3..1e9 and eps/D 0..0.05', () => {
     const reArb = fc.double({ min: Math.log10(2000), max: 9, noNaN: true }).map((u) => 10 ** u);
@@ -90,7 +90,8 @@ describe('colebrook against a 45-digit decimal.js solution', () => {
       }),
       { numRuns: 3000 },
     );
-  });
+    // 3000 decimal solves take a few seconds, longer under coverage.
+  }, 120_000);
 
   it('keeps the value shown in the doc comment', () => {
     // Re 1e5, eps/D 1e-4: the 45-digit solve above gives 0.0185138660774716427.
@@ -115,5 +116,5 @@ describe('colebrook residual and iteration count', () => {
       ),
       { numRuns: 2000 },
     );
-  });
+  }, 60_000);
 });
