@@ -13,7 +13,7 @@ const CONTRACTION_HINT =
  *
  * with `beta = d2 / d1`. At 180 degrees this is the sudden contraction
  * `K = 0.5 (1 - beta^2)` ({@link suddenContractionK}). At 45 degrees the two branches agree
- * within 1 % (0.306 against 0.309 times (1 - beta^2)).
+ * within 1.1 % (0.3061 against 0.3093 times (1 - beta^2)).
  *
  * Validity: turbulent flow. Source and note as {@link gradualExpansionK}: Crane TP-410,
  * page A-26, formulas 1 and 2, K1 referred to the smaller diameter (via Ludwig, Table 2-2).

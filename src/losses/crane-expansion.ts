@@ -8,7 +8,7 @@ import { checkAngle, diameterRatio } from './diameters';
  * - `angle <= 45 deg`: `K = 2.6 sin(angle/2) (1 - beta^2)^2`  (Crane formula 3)
  * - `45 deg < angle <= 180 deg`: `K = (1 - beta^2)^2`  (Crane formula 4, Borda-Carnot)
  *
- * with `beta = d1 / d2`. At 45 degrees the two agree within 0.5 % (2.6 sin 22.5 = 0.995).
+ * with `beta = d1 / d2`. At 45 degrees the two agree within 0.6 % (2.6 sin 22.5 deg = 0.99498).
  * Refer K to the larger pipe with {@link referK}.
  *
  * Validity: turbulent flow; the source tabulates it for reducers and expanders and reduced-
