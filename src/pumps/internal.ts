@@ -1,0 +1,181 @@
+/**
+ * Private helpers of the pumps module: curve kernels on plain numbers, a bounded maximum
+ * search, and the range check with its message. Not exported from the module.
+ *
+ * @module
+ */
+import { argumentError, HeadflowError } from '../errors';
+import { monotoneCubic } from '../numeric/interpolate';
+import { polynomialLeastSquares } from '../numeric/least-squares';
+import type { CurveFit, FitReport } from './types';
+
+/** A fitted curve on plain SI numbers. */
+export interface Kernel {
+  readonly xMin: number;
+  readonly xMax: number;
+  evaluate(x: number): number;
+  derivative(x: number): number;
+  readonly report: FitReport;
+}
+
+/** Fits one catalogue curve. `name` is used in messages ("head", "efficiency" ...). */
+export function fitKernel(
+  name: string,
+  xs: readonly number[],
+  ys: readonly number[],
+  spec: CurveFit,
+  throughOrigin: boolean,
+): Kernel {
+  const first = xs[0] ?? 0;
+  const last = xs[xs.length - 1] ?? 0;
+  if (spec.method === 'monotone') {
+    const px = throughOrigin && first > 0 ? [0, ...xs] : [...xs];
+    const py = throughOrigin && first > 0 ? [0, ...ys] : [...ys];
+    const f = monotoneCubic(px, py);
+    return {
+      xMin: f.xMin,
+      xMax: f.xMax,
+      evaluate: (x) => f.evaluate(x),
+      derivative: (x) => f.derivative(x),
+      report: {
+        method: 'monotone',
+        degree: undefined,
+        points: xs.length,
+        rms: 0,
+        maxResidual: 0,
+        rSquared: 1,
+      },
+    };
+  }
+  if (spec.method !== 'polynomial') {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      `fit.${name}.method`,
+      String((spec as { method: unknown }).method),
+      undefined,
+      "'polynomial' or 'monotone'",
+    );
+  }
+  const low = throughOrigin ? 1 : 0;
+  const needed = spec.degree - low + 1;
+  if (Number.isInteger(spec.degree) && spec.degree >= low && xs.length < needed) {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      `fit.${name}.degree`,
+      spec.degree,
+      undefined,
+      `at most ${xs.length - 1 + low} with ${xs.length} ${name} points`,
+    );
+  }
+  const p = polynomialLeastSquares(xs, ys, spec.degree, { throughOrigin, scale: last });
+  return {
+    xMin: first,
+    xMax: last,
+    evaluate: p.evaluate,
+    derivative: p.derivative,
+    report: {
+      method: 'polynomial',
+      degree: spec.degree,
+      points: xs.length,
+      rms: p.rms,
+      maxResidual: p.maxResidual,
+      rSquared: p.rSquared,
+    },
+  };
+}
+
+/** Relative slack for range checks: flows within this fraction of the range's end count as in. */
+export const RANGE_SLACK = 1e-12;
+
+/**
+ * Returns x clamped into [lo, hi] when it lies inside within round-off, else throws
+ * `OUT_OF_RANGE` naming the quantity and the range (in the caller's scale).
+ */
+export function inRange(
+  what: string,
+  x: number,
+  lo: number,
+  hi: number,
+  scale: number,
+  unit: string,
+): number {
+  const slack = RANGE_SLACK * Math.max(Math.abs(hi), Math.abs(lo));
+  if (typeof x !== 'number' || Number.isNaN(x)) {
+    throw argumentError('INVALID_ARGUMENT', 'flow', x, 'm3/s', 'a finite number >= 0');
+  }
+  if (x < 0) {
+    throw argumentError('INVALID_ARGUMENT', 'flow', x * scale, 'm3/s', 'a finite number >= 0');
+  }
+  if (x < lo - slack || x > hi + slack) {
+    const range = `${fmt(lo * scale)} to ${fmt(hi * scale)} ${unit}`;
+    throw new HeadflowError(
+      'OUT_OF_RANGE',
+      `flow = ${fmt(x * scale)} ${unit} is outside the ${what} data (${range}); ` +
+        'pump curves never extrapolate past their catalogue points.',
+      { parameter: 'flow', value: x * scale, unit, allowed: range },
+    );
+  }
+  return Math.max(lo, Math.min(x, hi));
+}
+
+/** Formats a number for messages with 6 significant digits. */
+export function fmt(v: number): string {
+  return Number.parseFloat(v.toPrecision(6)).toString();
+}
+
+/** Result of {@link maximize}. */
+export interface MaxResult {
+  readonly x: number;
+  readonly value: number;
+  readonly evaluations: number;
+}
+
+/**
+ * Largest value of f on [a, b]: a scan of `grid` equal steps, then golden-section search
+ * between the neighbours of the best grid point (bounded: at most 200 steps). Finds the
+ * global maximum of curves with one hump per grid step, which catalogue curves are.
+ */
+export function maximize(f: (x: number) => number, a: number, b: number, grid = 128): MaxResult {
+  let best = 0;
+  let bestV = Number.NEGATIVE_INFINITY;
+  let evaluations = 0;
+  const h = (b - a) / grid;
+  for (let i = 0; i <= grid; i++) {
+    const v = f(i === grid ? b : a + i * h);
+    evaluations++;
+    if (v > bestV) {
+      bestV = v;
+      best = i;
+    }
+  }
+  let lo = Math.max(a, a + (best - 1) * h);
+  let hi = Math.min(b, a + (best + 1) * h);
+  const r = (Math.sqrt(5) - 1) / 2;
+  let x1 = hi - r * (hi - lo);
+  let x2 = lo + r * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  evaluations += 2;
+  const tol = 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+  for (let k = 0; k < 200 && hi - lo > tol; k++) {
+    if (f1 >= f2) {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - r * (hi - lo);
+      f1 = f(x1);
+    } else {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + r * (hi - lo);
+      f2 = f(x2);
+    }
+    evaluations++;
+  }
+  const xm = 0.5 * (lo + hi);
+  const vm = f(xm);
+  evaluations++;
+  const gridX = best === grid ? b : a + best * h;
+  return vm >= bestV ? { x: xm, value: vm, evaluations } : { x: gridX, value: bestV, evaluations };
+}
