@@ -8,5 +8,7 @@
 export { HeadflowError, type HeadflowErrorCode, type HeadflowErrorDetails } from './errors';
 export * from './fluids/index';
 export * from './friction/index';
+export * from './losses/index';
 export * from './pipes/index';
+export * from './system/index';
 export * from './units/index';

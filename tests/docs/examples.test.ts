@@ -64,3 +64,18 @@ describe('docs/units.md lists the whole catalogue', () => {
     for (const symbol of Object.keys(UNITS)) expect(page).toContain(`| \`${symbol}\` |`);
   });
 });
+
+describe('system example', () => {
+  it('prints the duty of each operating case, and the aged low-level case needs more head', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    const mod = (await import('../../docs/examples/system-transfer')) as { heads: number[] };
+    const lines = log.mock.calls.map((c) => String(c[0]));
+    log.mockRestore();
+    expect(lines).toEqual([
+      'normal level, new pipe: 35.09 m at 12 L/s',
+      'low level, aged pipe: 41.51 m at 12 L/s',
+    ]);
+    expect(read('docs/system.md')).toContain(lines.join('\n'));
+    expect(mod.heads[1]).toBeGreaterThan(mod.heads[0] ?? Number.POSITIVE_INFINITY);
+  });
+});

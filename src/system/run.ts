@@ -1,0 +1,271 @@
+/**
+ * A pipe run (segment): a length of one inside diameter with its wall roughness, fittings,
+ * valves and equipment. Validated once; evaluating its loss at a flow allocates nothing.
+ *
+ * @module
+ */
+import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
+import { frictionFactor, LAMINAR_LIMIT } from '../friction/index';
+import { type FittingCount, type FittingSet, fittingSet, kFromCv, kFromKv } from '../losses/index';
+import { type MaterialName, material, type PipeDimensions } from '../pipes/index';
+import type { Acceleration, Density, Flow, Length } from '../units/index';
+
+/**
+ * A valve or restriction given by its flow coefficient, referred to the run's inside
+ * diameter: exactly one of `cv` (US gal/min at 1 psi), `kv` (m3/h at 1 bar) or `k`.
+ */
+export interface ValveCoefficient {
+  readonly name?: string;
+  readonly cv?: number;
+  readonly kv?: number;
+  readonly k?: number;
+}
+
+/**
+ * Equipment with its own loss (a heat exchanger, a filter, a meter), for example from
+ * `ratedLoss` or `curveLoss` in the losses module: anything that gives a head loss at a flow.
+ */
+export interface LossComponent {
+  readonly name?: string;
+  /** Head loss (m of the fluid) at `flow` for a fluid of `density`. */
+  headLoss(flow: Flow, density: Density, g?: Acceleration): Length;
+}
+
+/** What a pipe run is made of. Give `insideDiameter` or `pipe` (one of them). */
+export interface PipeRunInput {
+  /** Name for reports (default `run 1`, `run 2` ... by position). */
+  readonly name?: string;
+  /** Length of straight pipe (m), >= 0. */
+  readonly length: Length;
+  /** Inside diameter (m), > 0; or give `pipe`. */
+  readonly insideDiameter?: Length;
+  /** A size from the pipes module (`pipeSize('4', '40')`); its inside diameter is used. */
+  readonly pipe?: PipeDimensions;
+  /** Absolute roughness of new pipe (m); or give `material`. */
+  readonly roughness?: Length;
+  /** Absolute roughness of aged pipe (m), for aged-pipe scenarios. */
+  readonly agedRoughness?: Length;
+  /** Wall material from the pipes module; gives the new and (where listed) aged roughness. */
+  readonly material?: MaterialName;
+  /** Fittings in the run, from the losses catalogue. */
+  readonly fittings?: readonly FittingCount[];
+  /** Valves or restrictions given by Cv, Kv or K (referred to this run's diameter). */
+  readonly valves?: readonly ValveCoefficient[];
+  /** Equipment with its own loss curve or rating. */
+  readonly components?: readonly LossComponent[];
+  /** Rise of the run from inlet to outlet (m); informative, reported in details. */
+  readonly elevationChange?: Length;
+}
+
+/** Loss breakdown of one run at one flow, filled by {@link PipeRun.lossInto}. */
+export interface RunLossBreakdown {
+  velocity: number;
+  reynolds: number;
+  frictionFactor: number;
+  pipeLoss: number;
+  fittingsLoss: number;
+  componentLoss: number;
+}
+
+/** A validated pipe run, ready to evaluate. */
+export interface PipeRun {
+  readonly kind: 'run';
+  readonly name: string;
+  readonly length: Length;
+  readonly insideDiameter: Length;
+  /** Roughness used (new or aged, as chosen when the run was built). */
+  readonly roughness: Length;
+  readonly relativeRoughness: number;
+  /** Flow area (m^2). */
+  readonly area: number;
+  /** Sum of constant K from valves given by Cv/Kv/K (referred to this diameter). */
+  readonly valveK: number;
+  readonly elevationChange: Length | undefined;
+  readonly input: PipeRunInput;
+}
+
+/** @internal Evaluation context shared by the runs of a system (fluid and friction policy). */
+export interface RunContext {
+  readonly density: number;
+  readonly kinematicViscosity: number;
+  readonly g: number;
+  readonly friction: Parameters<typeof frictionFactor>[2];
+}
+
+/** @internal A run with its precomputed loss evaluator. */
+export interface RunEvaluator {
+  readonly run: PipeRun;
+  readonly fittings: FittingSet | undefined;
+  readonly components: readonly LossComponent[];
+}
+
+function roughnessOf(input: PipeRunInput, name: string, aged: boolean): number {
+  const mat = input.material === undefined ? undefined : material(input.material);
+  if (aged) {
+    if (input.agedRoughness !== undefined) {
+      checkNonNegative(`${name}.agedRoughness`, input.agedRoughness, 'm');
+      return input.agedRoughness;
+    }
+    if (mat?.agedRoughness !== undefined) return mat.agedRoughness.max;
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      `${name}.agedRoughness`,
+      undefined,
+      'm',
+      'an absolute roughness >= 0',
+      'An aged-pipe case needs the aged roughness of every run: give agedRoughness, or a material whose table row lists an aged range.',
+    );
+  }
+  if (input.roughness !== undefined) {
+    checkNonNegative(`${name}.roughness`, input.roughness, 'm');
+    return input.roughness;
+  }
+  if (mat !== undefined) return mat.roughness;
+  throw argumentError(
+    'INVALID_ARGUMENT',
+    `${name}.roughness`,
+    undefined,
+    'm',
+    'an absolute roughness >= 0',
+    'Give roughness or material.',
+  );
+}
+
+function valveK(valve: ValveCoefficient, diameter: Length, name: string): number {
+  const given = [valve.cv, valve.kv, valve.k].filter((v) => v !== undefined).length;
+  if (given !== 1) {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      `${name}`,
+      given,
+      'coefficients',
+      'exactly one of cv, kv or k',
+    );
+  }
+  if (valve.cv !== undefined) return kFromCv(valve.cv, diameter);
+  if (valve.kv !== undefined) return kFromKv(valve.kv, diameter);
+  checkNonNegative(`${name}.k`, valve.k as number);
+  return valve.k as number;
+}
+
+/**
+ * Validates a pipe run and fixes its roughness (new, or aged when `aged` is true).
+ *
+ * @param input - the run's length, diameter (or pipe size), roughness (or material),
+ *   fittings, valves, components
+ * @param position - 1-based position, for the default name
+ * @param aged - use the aged roughness (default false)
+ * @throws HeadflowError `INVALID_ARGUMENT` for a negative length, a zero or missing diameter,
+ *   a missing roughness, a valve with other than one coefficient; `UNKNOWN_NAME` for an
+ *   unknown fitting or material.
+ * @example
+ * ```ts
+ * const suction = pipeRun({ length: q(6, 'm'), pipe: pipeSize('6', '40'), material: 'commercial-steel' });
+ * ```
+ */
+export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRun {
+  const name = input.name ?? `run ${position}`;
+  checkNonNegative(`${name}.length`, input.length, 'm');
+  let diameter: number;
+  if (input.insideDiameter !== undefined) {
+    checkPositive(`${name}.insideDiameter`, input.insideDiameter, 'm');
+    diameter = input.insideDiameter;
+  } else if (input.pipe !== undefined) {
+    diameter = input.pipe.insideDiameter;
+  } else {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      `${name}.insideDiameter`,
+      undefined,
+      'm',
+      '> 0',
+      'Give insideDiameter or pipe.',
+    );
+  }
+  const roughness = roughnessOf(input, name, aged);
+  const relativeRoughness = roughness / diameter;
+  let kSum = 0;
+  for (const [i, v] of (input.valves ?? []).entries()) {
+    kSum += valveK(v, diameter as Length, `${name}.valves[${i}]`);
+  }
+  if (input.elevationChange !== undefined)
+    checkFinite(`${name}.elevationChange`, input.elevationChange, 'm');
+  return Object.freeze({
+    kind: 'run',
+    name,
+    length: input.length,
+    insideDiameter: diameter as Length,
+    roughness: roughness as Length,
+    relativeRoughness,
+    area: (Math.PI * diameter * diameter) / 4,
+    valveK: kSum,
+    elevationChange: input.elevationChange,
+    input,
+  });
+}
+
+/** @internal Precomputes a run's fittings for evaluation. */
+export function runEvaluator(run: PipeRun): RunEvaluator {
+  const list = run.input.fittings ?? [];
+  return {
+    run,
+    fittings: list.length === 0 ? undefined : fittingSet(list, run.insideDiameter),
+    components: run.input.components ?? [],
+  };
+}
+
+/**
+ * @internal Head loss of a run at a flow (m); fills `out` with the breakdown when given.
+ * Zero flow has zero loss. Allocates nothing.
+ */
+export function runLoss(
+  ev: RunEvaluator,
+  flow: number,
+  ctx: RunContext,
+  out?: RunLossBreakdown,
+): number {
+  const run = ev.run;
+  const q = Math.abs(flow);
+  if (q === 0) {
+    if (out) {
+      out.velocity = 0;
+      out.reynolds = 0;
+      out.frictionFactor = Number.POSITIVE_INFINITY;
+      out.pipeLoss = 0;
+      out.fittingsLoss = 0;
+      out.componentLoss = 0;
+    }
+    return 0;
+  }
+  const d = run.insideDiameter;
+  const v = q / run.area;
+  const nu = ctx.kinematicViscosity;
+  const re = (v * d) / nu;
+  const velocityHead = (v * v) / (2 * ctx.g);
+  // Laminar (Re <= 2300, every friction policy gives 64/Re there): written as Hagen-Poiseuille,
+  // 32 nu L V / (g D^2), which stays finite as the flow tends to zero.
+  const laminar = re <= LAMINAR_LIMIT;
+  const f = laminar ? 64 / re : frictionFactor(re, run.relativeRoughness, ctx.friction);
+  const pipeLoss = laminar
+    ? (32 * nu * run.length * v) / (ctx.g * d * d)
+    : ((f * run.length) / d) * velocityHead;
+  // Fittings: K = K1/Re + K_turbulent, so K V^2/(2g) = K1 nu V / (2 g D) + K_turbulent V^2/(2g).
+  const fs = ev.fittings;
+  const fittingsLoss =
+    (fs === undefined ? 0 : (fs.laminar * nu * v) / (2 * ctx.g * d)) +
+    (run.valveK + (fs === undefined ? 0 : fs.turbulent)) * velocityHead;
+  let componentLoss = 0;
+  for (const c of ev.components) {
+    componentLoss += c.headLoss(q as Flow, ctx.density as Density, ctx.g as Acceleration);
+  }
+  if (out) {
+    out.velocity = v;
+    out.reynolds = re;
+    out.frictionFactor = f;
+    out.pipeLoss = pipeLoss;
+    out.fittingsLoss = fittingsLoss;
+    out.componentLoss = componentLoss;
+  }
+  const total = pipeLoss + fittingsLoss + componentLoss;
+  return flow < 0 ? -total : total;
+}
