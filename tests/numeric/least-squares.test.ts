@@ -7,19 +7,31 @@ describe('polynomialLeastSquares', () => {
   it('rejects impossible input', () => {
     expectHeadflowError(() => polynomialLeastSquares([0, 1], [0, 1, 2], 1), 'INVALID_ARGUMENT');
     expectHeadflowError(() => polynomialLeastSquares([0, 1], [0, 1], 2), 'INVALID_ARGUMENT');
-    expectHeadflowError(() => polynomialLeastSquares([0, 1, 2], [0, 1, 2], 1.5), 'INVALID_ARGUMENT');
+    expectHeadflowError(
+      () => polynomialLeastSquares([0, 1, 2], [0, 1, 2], 1.5),
+      'INVALID_ARGUMENT',
+    );
     expectHeadflowError(
       () => polynomialLeastSquares([0, 1, 2], [0, 1, 2], 0, { throughOrigin: true }),
       'INVALID_ARGUMENT',
     );
-    expectHeadflowError(() => polynomialLeastSquares([0, Number.NaN, 2], [0, 1, 2], 1), 'INVALID_ARGUMENT');
-    expectHeadflowError(() => polynomialLeastSquares([0, 1, 2], [0, Infinity, 2], 1), 'INVALID_ARGUMENT');
+    expectHeadflowError(
+      () => polynomialLeastSquares([0, Number.NaN, 2], [0, 1, 2], 1),
+      'INVALID_ARGUMENT',
+    );
+    expectHeadflowError(
+      () => polynomialLeastSquares([0, 1, 2], [0, Infinity, 2], 1),
+      'INVALID_ARGUMENT',
+    );
     expectHeadflowError(
       () => polynomialLeastSquares([0, 1, 2], [0, 1, 2], 1, { scale: 0 }),
       'INVALID_ARGUMENT',
     );
     // repeated abscissae cannot fix a quadratic
-    expectHeadflowError(() => polynomialLeastSquares([1, 1, 1, 2], [1, 2, 3, 4], 2), 'INVALID_ARGUMENT');
+    expectHeadflowError(
+      () => polynomialLeastSquares([1, 1, 1, 2], [1, 2, 3, 4], 2),
+      'INVALID_ARGUMENT',
+    );
   });
   it('reproduces the doc example (data on 1 + 2x^2)', () => {
     const fit = polynomialLeastSquares([0, 1, 2, 3], [1, 3, 9, 19], 2);
@@ -62,7 +74,12 @@ describe('polynomialLeastSquares', () => {
   });
   it('through the origin: the fit of y = x (1 - x) has no constant term', () => {
     const xs = [0.25, 0.5, 0.75, 1];
-    const fit = polynomialLeastSquares(xs, xs.map((x) => x * (1 - x)), 2, { throughOrigin: true });
+    const fit = polynomialLeastSquares(
+      xs,
+      xs.map((x) => x * (1 - x)),
+      2,
+      { throughOrigin: true },
+    );
     expect(fit.lowestPower).toBe(1);
     expect(fit.evaluate(0)).toBe(0);
     expectRelative(fit.derivative(0), 1, 1e-13);
@@ -77,7 +94,10 @@ describe('polynomialLeastSquares', () => {
           const xs = Array.from({ length: 9 }, (_, i) => 1e-3 + (i * 5e-2) / 8);
           const p = (x: number): number => {
             const t = x / 0.05;
-            return (c[0] as number) + t * ((c[1] as number) + t * ((c[2] as number) + t * (c[3] as number)));
+            return (
+              (c[0] as number) +
+              t * ((c[1] as number) + t * ((c[2] as number) + t * (c[3] as number)))
+            );
           };
           const fit = polynomialLeastSquares(xs, xs.map(p), 3);
           for (const x of xs) expectAbsolute(fit.evaluate(x), p(x), 1e-11);

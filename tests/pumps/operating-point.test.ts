@@ -59,7 +59,7 @@ describe('operatingPoint', () => {
     expectRelative(to(op.head, 'm'), 30, 1e-9);
     expectRelative(op.efficiency ?? 0, 0.75, 1e-9);
     expectRelative(op.shaftPower ?? 0, (1000 * 9.80665 * (100 / 3600) * 30) / 0.75, 1e-9);
-    expectRelative(to(op.npshRequired ?? 0, 'm'), 1 + 0.0002 * 100 * 100, 1e-9);
+    expectRelative(to(op.npshRequired ?? q(0, 'm'), 'm'), 1 + 0.0002 * 100 * 100, 1e-9);
     expectRelative(op.percentOfBep ?? 0, 100, 1e-7);
     expect(op.inPreferredRegion).toBe(true);
     expect(op.inAllowableRegion).toBe(true);

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { type CataloguePoint, type Flow, pumpCurve } from '../../src/pumps/index';
-import { type Length, q, to } from '../../src/units';
+import { type CataloguePoint, pumpCurve } from '../../src/pumps/index';
+import { type Flow, type Length, q, to } from '../../src/units';
 import { expectAbsolute, expectHeadflowError, expectRelative } from '../helpers/expect';
 import { EXACT_FITS, PUMP_A, quadraticPoints, quadraticPump } from './fixtures';
 
@@ -166,7 +166,7 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
     expect(pump.fits.efficiency?.degree).toBe(2);
     expect(pump.fits.npshRequired?.method).toBe('monotone');
     expect(pump.fits.shaftPower).toBeUndefined();
-    expect(to(pump.shutoffHead ?? 0, 'm')).toBeCloseTo(40, 12);
+    expect(to(pump.shutoffHead ?? q(0, 'm'), 'm')).toBeCloseTo(40, 12);
     expectRelative(to(pump.flowRange.max, 'm3/h'), 180, 1e-15);
   });
   it('throws OUT_OF_RANGE past the last catalogue point, with the range in the message', () => {
@@ -187,7 +187,7 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
     expectRelative(to(p.flowRange.min, 'm3/h'), 30, 1e-14);
     expectHeadflowError(() => p.head(q(10, 'm3/h')), 'OUT_OF_RANGE');
     const e = pumpCurve({ speed: rpm, points: pts, fit: EXACT_FITS, extrapolateShutoff: true });
-    expectRelative(to(e.shutoffHead ?? 0, 'm'), 40, 1e-12);
+    expectRelative(to(e.shutoffHead ?? q(0, 'm'), 'm'), 40, 1e-12);
     expect(e.flowRange.min).toBe(0);
     expectHeadflowError(
       () => pumpCurve({ speed: rpm, points: pts, extrapolateShutoff: true }),
@@ -198,16 +198,16 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
     const bep = pump.bestEfficiencyPoint;
     // A maximum located by comparing values is fixed only to about sqrt(machine epsilon)
     // relative (the function is flat there): 1e-7 allows for that, the value itself is exact.
-    expectRelative(to(bep?.flow ?? 0, 'm3/h'), 100, 1e-7);
+    expectRelative(to(bep?.flow ?? q(0, 'm3/h'), 'm3/h'), 100, 1e-7);
     expectRelative(bep?.efficiency ?? 0, 0.75, 1e-14);
-    expectRelative(to(bep?.head ?? 0, 'm'), 30, 1e-7);
+    expectRelative(to(bep?.head ?? q(0, 'm'), 'm'), 30, 1e-7);
   });
   it('preferred region 70-120 % of BEP flow (ANSI/HI 9.6.3), allowable = catalogue range', () => {
     // 1e-7: the BEP flow's own accuracy (see above)
-    expectRelative(to(pump.preferredRegion?.min ?? 0, 'm3/h'), 70, 1e-7);
-    expectRelative(to(pump.preferredRegion?.max ?? 0, 'm3/h'), 120, 1e-7);
-    expectAbsolute(to(pump.allowableRegion?.min ?? 1, 'm3/h'), 0, 1e-12);
-    expectRelative(to(pump.allowableRegion?.max ?? 0, 'm3/h'), 180, 1e-12);
+    expectRelative(to(pump.preferredRegion?.min ?? q(0, 'm3/h'), 'm3/h'), 70, 1e-7);
+    expectRelative(to(pump.preferredRegion?.max ?? q(0, 'm3/h'), 'm3/h'), 120, 1e-7);
+    expectAbsolute(to(pump.allowableRegion?.min ?? q(1, 'm3/h'), 'm3/h'), 0, 1e-12);
+    expectRelative(to(pump.allowableRegion?.max ?? q(0, 'm3/h'), 'm3/h'), 180, 1e-12);
     expect(pump.shares(q(100, 'm3/h'))[0]?.inPreferredRegion).toBe(true);
     expect(pump.shares(q(150, 'm3/h'))[0]?.inPreferredRegion).toBe(false);
     const custom = pumpCurve({
@@ -216,8 +216,8 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
       fit: EXACT_FITS,
       regions: { preferred: [0.8, 1.1], allowable: [0.5, 1.3] },
     });
-    expectRelative(to(custom.allowableRegion?.max ?? 0, 'm3/h'), 130, 1e-7);
-    expectRelative(to(custom.preferredRegion?.min ?? 0, 'm3/h'), 80, 1e-7);
+    expectRelative(to(custom.allowableRegion?.max ?? q(0, 'm3/h'), 'm3/h'), 130, 1e-7);
+    expectRelative(to(custom.preferredRegion?.min ?? q(0, 'm3/h'), 'm3/h'), 80, 1e-7);
   });
   it('shaft power = rho g Q H / eta, finite at zero flow', () => {
     const Q = q(100, 'm3/h');
@@ -233,7 +233,7 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
   });
   it('NPSH required from the monotone fit through its points', () => {
     expectRelative(to(pump.npshRequired(q(90, 'm3/h')), 'm'), 1 + 0.0002 * 8100, 1e-13);
-    expectRelative(to(pump.npshRange?.min ?? 0, 'm3/h'), 30, 1e-14);
+    expectRelative(to(pump.npshRange?.min ?? q(0, 'm3/h'), 'm3/h'), 30, 1e-14);
   });
   it('a pump without efficiency or NPSH data says so', () => {
     const p = pumpCurve({
@@ -275,7 +275,7 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
       1e-13,
     );
     expect(p.fits.shaftPower?.method).toBe('monotone');
-    expectRelative(to(p.bestEfficiencyPoint?.flow ?? 0, 'm3/h'), 100, 0.05);
+    expectRelative(to(p.bestEfficiencyPoint?.flow ?? q(0, 'm3/h'), 'm3/h'), 100, 0.05);
     expectHeadflowError(
       () =>
         pumpCurve({
