@@ -23,7 +23,11 @@ const design: SystemDefinition = {
       pipe: pipeSize('4', '40'),
       material: 'commercial-steel',
       agedRoughness: q(0.5, 'mm'),
-      fittings: [{ id: 'entrance-sharp' }, { id: 'elbow-90-long-radius' }, { id: 'gate-valve-open' }],
+      fittings: [
+        { id: 'entrance-sharp' },
+        { id: 'elbow-90-long-radius' },
+        { id: 'gate-valve-open' },
+      ],
     },
     {
       name: 'discharge',
