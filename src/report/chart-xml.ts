@@ -21,7 +21,7 @@ export function escapeXml(text: string): string {
     else if (c === 0x3c) out += '&lt;';
     else if (c === 0x3e) out += '&gt;';
     else if (c === 0x22) out += '&quot;';
-    else if (c === 0x27) out += '&#39;';
+    else if (c === 0x27) out += '&apos;';
     else if (c === 0x09 || c === 0x0a || c === 0x0d) out += `&#${c};`;
     else if (c < 0x20 || c === 0xfffe || c === 0xffff) out += '\ufffd';
     else if (c >= 0xd800 && c <= 0xdbff) {
