@@ -11,9 +11,16 @@ import { expectAbsolute, expectHeadflowError } from '../helpers/expect';
 
 // --- a parsed view of the SVG: every element with its attributes, text and ancestors' classes
 
+/** Attributes by name; `class` and `d` are named so that they read as properties. */
+interface Attributes {
+  readonly [name: string]: string | undefined;
+  readonly class?: string;
+  readonly d?: string;
+}
+
 interface Element {
   readonly tag: string;
-  readonly attrs: Readonly<Record<string, string>>;
+  readonly attrs: Attributes;
   readonly text: string;
   readonly within: readonly string[];
 }
@@ -39,8 +46,9 @@ function elements(svg: string): Element[] {
       const tag = Object.keys(node).find((k) => k !== ':@');
       if (tag === undefined || tag === '#text' || tag === '?xml') continue;
       const raw = (node[':@'] ?? {}) as Record<string, string>;
-      const attrs: Record<string, string> = {};
-      for (const [k, v] of Object.entries(raw)) attrs[k] = decode(String(v));
+      const attrs: Attributes = Object.fromEntries(
+        Object.entries(raw).map(([k, v]) => [k, decode(String(v))]),
+      );
       const children = node[tag] as Node[];
       const text = decode(
         children
