@@ -5,19 +5,19 @@
 
 /** Levenshtein edit distance between two short strings. */
 export function editDistance(a: string, b: string): number {
-  const row = new Array<number>(b.length + 1);
+  const row = new Float64Array(b.length + 1);
   for (let j = 0; j <= b.length; j++) row[j] = j;
   for (let i = 1; i <= a.length; i++) {
-    let diagonal = row[0] ?? 0;
+    let diagonal = row[0] as number;
     row[0] = i;
     for (let j = 1; j <= b.length; j++) {
-      const above = row[j] ?? 0;
+      const above = row[j] as number;
       const cost = a.charCodeAt(i - 1) === b.charCodeAt(j - 1) ? 0 : 1;
-      row[j] = Math.min(above + 1, (row[j - 1] ?? 0) + 1, diagonal + cost);
+      row[j] = Math.min(above + 1, (row[j - 1] as number) + 1, diagonal + cost);
       diagonal = above;
     }
   }
-  return row[b.length] ?? 0;
+  return row[b.length] as number;
 }
 
 /**

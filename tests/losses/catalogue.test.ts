@@ -174,3 +174,18 @@ describe('fittingSet', () => {
     );
   });
 });
+
+describe('2-K entries (internal path; no catalogue row has 2-K constants yet)', () => {
+  it('kParts and methodFor evaluate an entry with 2-K constants as twoK does', async () => {
+    const { kParts, methodFor } = await import('../../src/losses/catalogue');
+    const { twoK } = await import('../../src/losses');
+    // Invented constants, for the code path only (not a fitting's data).
+    const entry = { id: 'test-2k', description: 'test', twoK: { k1: 500, kInf: 0.2 }, sources: [] };
+    expect(methodFor(entry, undefined)).toBe('2K');
+    expect(methodFor(entry, '2K')).toBe('2K');
+    expectHeadflowError(() => methodFor(entry, 'constant'), 'INVALID_ARGUMENT');
+    const d = q(3, 'in');
+    const parts = kParts(entry, '2K', d);
+    expectRelative(parts.laminar / 1e4 + parts.turbulent, twoK(500, 0.2, 1e4, d), 1e-15);
+  });
+});
