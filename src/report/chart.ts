@@ -104,7 +104,7 @@ function tickCount(pixels: number, spacing: number): number {
  *   units: { flow: 'L/s', head: 'm' },
  *   pumpCurves: [{ name: 'candidate A', points: [{ flow: 0, value: 40 }, { flow: 0.03, value: 22 }] }],
  *   systemCurves: [{ name: 'high tank', points: [{ flow: 0, value: 12 }, { flow: 0.03, value: 30 }] }],
- *   operatingPoints: [{ name: 'A / high tank', flow: 0.0225, head: 26.5 }],
+ *   operatingPoints: [{ name: 'A / high tank', flow: 0.0233, head: 26 }],
  *   preferredRegions: [{ name: 'candidate A', minFlow: 0.015, maxFlow: 0.027 }],
  *   efficiencyCurves: [],
  *   npshRequired: [],
