@@ -7,8 +7,10 @@
  */
 export { HeadflowError, type HeadflowErrorCode, type HeadflowErrorDetails } from './errors';
 export * from './fluids/index';
+export * from './design/index';
 export * from './friction/index';
 export * from './losses/index';
 export * from './pipes/index';
+export * from './pumps/index';
 export * from './system/index';
 export * from './units/index';

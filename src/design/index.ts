@@ -1,0 +1,27 @@
+/**
+ * The whole job: a design (system, operating cases, duty, candidate pumps, duty profile, price
+ * of energy) evaluated into a report with every case's operating point, every check, the motor,
+ * the yearly energy and the cautions.
+ *
+ * @module design
+ */
+export { CAUTIONS } from './cautions';
+export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
+export type {
+  Arrangement,
+  CandidateInput,
+  CandidateReport,
+  CaseDuty,
+  CaseResult,
+  Check,
+  DesignInput,
+  DesignLimits,
+  DesignReport,
+  DisplayUnits,
+  PumpLocation,
+  ReportCurves,
+  SampledCurve,
+  Severity,
+  SpeedControl,
+  UnitSystem,
+} from './types';

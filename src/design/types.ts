@@ -1,0 +1,263 @@
+/**
+ * The shapes of a design evaluation: what goes in (the system, its operating cases, the duty,
+ * the candidate pumps, the duty profile and the price of energy) and the report that comes out.
+ *
+ * @module
+ */
+import type { MotorRating, MotorSeries, ProfileRow, PumpCurve } from '../pumps/index';
+import type { OperatingCase, RunDetails, SystemDefinition } from '../system/index';
+import type {
+  Flow,
+  Length,
+  Power,
+  Pressure,
+  RotationalSpeed,
+  UnitOf,
+  Velocity,
+} from '../units/index';
+
+/** How several identical pumps of a candidate are connected. */
+export type Arrangement = 'single' | 'parallel' | 'series';
+
+/**
+ * How a candidate meets the duty: `'fixed'` runs at full speed (a valve throttles it to the
+ * duty flow when the profile asks for less), `'speed'` has a variable-speed drive that turns
+ * it down to each required flow.
+ */
+export type SpeedControl = 'fixed' | 'speed';
+
+/** A candidate pump set. */
+export interface CandidateInput {
+  /** Name for reports; unique among candidates. */
+  readonly name: string;
+  /** The pump's curve at its rated speed (from `pumpCurve`); it needs efficiency data. */
+  readonly pump: PumpCurve;
+  /** Number of identical pumps running together (default 1). */
+  readonly count?: number;
+  /** How they are connected when `count` > 1 (default `'parallel'`). */
+  readonly arrangement?: Arrangement;
+  /** Fixed speed or variable-speed drive (default `'fixed'`). */
+  readonly control?: SpeedControl;
+  /** Highest speed the drive may run at (speed control); default the curve's speed. */
+  readonly maxSpeed?: RotationalSpeed;
+  /** Motor efficiency, (0, 1]. */
+  readonly motorEfficiency: number;
+  /** Drive efficiency, (0, 1]; default 1 for fixed speed, and it should be given for a drive. */
+  readonly driveEfficiency?: number;
+  /** Motor rating series for the selection (default `'iec'`). */
+  readonly motorSeries?: MotorSeries;
+  /** Service factor the motor selection may rely on (default 1.0: none). */
+  readonly serviceFactor?: number;
+  /** An installed or proposed motor rating per pump, checked for overload when given. */
+  readonly motorRating?: Power;
+}
+
+/** Where the pump sits, for the NPSH available and the suction/discharge velocity checks. */
+export interface PumpLocation {
+  /** Elevation of the impeller eye (the NPSH datum), on the system's elevation datum. */
+  readonly elevation: Length;
+  /**
+   * How many of the system's first line elements are the suction line (upstream of the pump);
+   * they must be runs, not parallel groups. Default 1.
+   */
+  readonly suctionRuns?: number;
+}
+
+/** Limits and choices for the checks; every one has a documented default. */
+export interface DesignLimits {
+  /**
+   * NPSH margin ratio NPSHa / NPSHr the design must keep (default 1.1; ANSI/HI 9.6.1 gives
+   * ratios by application: see the pumps module's `npshMargin`).
+   */
+  readonly npshMarginRatio?: number;
+  /** Smallest NPSHa - NPSHr difference the design must keep (default 0.6 m; see `npshMargin`). */
+  readonly npshMinimumMargin?: Length;
+  /** Absolute design pressure of the discharge piping, to check the shut-off pressure. */
+  readonly designPressure?: Pressure;
+  /** Usual suction-line velocity range (default 0.5 to 1.5 m/s, common practice). */
+  readonly suctionVelocity?: { readonly min: Velocity; readonly max: Velocity };
+  /** Usual discharge-line velocity range (default 1 to 3 m/s, common practice). */
+  readonly dischargeVelocity?: { readonly min: Velocity; readonly max: Velocity };
+  /** Vapour pressure / suction surface pressure above which the fluid is "near boiling" (default 0.8). */
+  readonly nearBoilingRatio?: number;
+}
+
+/** Units a report is written in. */
+export type UnitSystem = 'si' | 'us';
+
+/** The whole design problem. */
+export interface DesignInput {
+  /** Name for the report. */
+  readonly name: string;
+  /** The system (fluid state, endpoints, line) in its design case. */
+  readonly system: SystemDefinition;
+  /** Name of the liquid for the report (for example `'water'`); default `'liquid'`. */
+  readonly fluidName?: string;
+  /** Operating cases; with none, the design case alone is evaluated. */
+  readonly cases?: readonly OperatingCase[];
+  /** The flow the pumps must deliver. */
+  readonly dutyFlow: Flow;
+  /** Where the pump sits (needed for NPSH available and the velocity checks). */
+  readonly pumpLocation?: PumpLocation;
+  /** Candidate pump sets; with none, the report gives the duty only. */
+  readonly candidates?: readonly CandidateInput[];
+  /** Hours a year at each flow (default: the duty flow for 8760 h). */
+  readonly profile?: readonly ProfileRow[];
+  /** Price of energy, for the yearly cost. */
+  readonly energyPrice?: { readonly perKWh: number; readonly currency: string };
+  /** Check limits. */
+  readonly limits?: DesignLimits;
+  /** Units for the report's text (default `'si'`); the report's numbers are SI either way. */
+  readonly units?: UnitSystem;
+}
+
+/** How serious a check's finding is. `error` fails the candidate (or the design). */
+export type Severity = 'error' | 'warning' | 'info';
+
+/** One finding of a check. */
+export interface Check {
+  /** Stable id, for example `'npsh-margin'`, `'preferred-region'`, `'motor-overload'`. */
+  readonly id: string;
+  readonly severity: Severity;
+  /** Candidate it concerns, if any. */
+  readonly candidate: string | undefined;
+  /** Operating case it concerns, if any. */
+  readonly case: string | undefined;
+  /** Plain words: what was found and what to do. */
+  readonly message: string;
+  /** The numbers behind it, SI, by name (for example `{ npshAvailable: 4.1, npshRequired: 3.6 }`). */
+  readonly values: Readonly<Record<string, number>>;
+  /** The standard, publication or 'common practice' the limit comes from. */
+  readonly source: string;
+}
+
+/** The duty in one operating case. */
+export interface CaseDuty {
+  readonly case: string;
+  /** Head the pumps must add at the duty flow. */
+  readonly head: Length;
+  readonly staticHead: Length;
+  readonly lossHead: Length;
+  /** NPSH available at the duty flow, when the pump location and a vapour pressure are known. */
+  readonly npshAvailable: Length | undefined;
+  /** Every run's figures at the duty flow. */
+  readonly runs: readonly RunDetails[];
+}
+
+/** Where a candidate runs in one operating case. */
+export interface CaseResult {
+  readonly case: string;
+  /** Why there is no operating point (the pump cannot reach the system ...), or undefined. */
+  readonly failure: string | undefined;
+  /** Speed it runs at (full speed, or what the drive needs for the duty flow). */
+  readonly speed: RotationalSpeed | undefined;
+  readonly flow: Flow | undefined;
+  readonly head: Length | undefined;
+  readonly efficiency: number | undefined;
+  /** Shaft power of the whole set. */
+  readonly shaftPower: Power | undefined;
+  /** Flow of one pump as % of its BEP flow (at the speed it runs at). */
+  readonly percentOfBep: number | undefined;
+  readonly region: 'preferred' | 'allowable' | 'outside' | undefined;
+  readonly npshAvailable: Length | undefined;
+  readonly npshRequired: Length | undefined;
+  /** NPSHa / NPSHr. */
+  readonly npshRatio: number | undefined;
+  /** Velocity in each run at this flow. */
+  readonly velocities: readonly { readonly run: string; readonly velocity: Velocity }[];
+  /** Root-finder iterations for the operating point (and the speed, under speed control). */
+  readonly iterations: number;
+}
+
+/** A candidate's evaluation. */
+export interface CandidateReport {
+  readonly name: string;
+  readonly count: number;
+  readonly arrangement: Arrangement;
+  readonly control: SpeedControl;
+  readonly cases: readonly CaseResult[];
+  /** Largest shaft power of one pump over its allowed flow range at its highest speed. */
+  readonly maxShaftPower: Power | undefined;
+  /** Smallest standard motor per pump that never overloads over the curve. */
+  readonly motor: MotorRating | undefined;
+  /** Smallest standard motor per pump that covers the duty points only. */
+  readonly dutyOnlyMotor: MotorRating | undefined;
+  /** Yearly energy and cost of the whole set over the profile, design case. */
+  readonly energy:
+    | {
+        readonly kWh: number;
+        readonly cost: { readonly amount: number; readonly currency: string } | undefined;
+      }
+    | undefined;
+  /** Checks of this candidate. */
+  readonly checks: readonly Check[];
+  /** True when no check of this candidate is an error. */
+  readonly passed: boolean;
+  /** 1-based rank among candidates (passing ones first, then by yearly energy). */
+  readonly rank: number;
+}
+
+/** A curve sampled for charts: `values[i]` at `flows[i]` (SI: m3/s and m, or a fraction). */
+export interface SampledCurve {
+  readonly name: string;
+  readonly flows: readonly number[];
+  readonly values: readonly number[];
+}
+
+/** The curves behind a report, sampled for charts (SI). */
+export interface ReportCurves {
+  /** System head per operating case. */
+  readonly systems: readonly SampledCurve[];
+  /** Head of each candidate set at each speed it runs at. */
+  readonly pumps: readonly SampledCurve[];
+  /** Efficiency of each candidate set at full speed (fraction). */
+  readonly efficiency: readonly SampledCurve[];
+  /** NPSH required of each candidate set at full speed (m). */
+  readonly npshRequired: readonly SampledCurve[];
+  /** NPSH available per operating case (m), where it is known. */
+  readonly npshAvailable: readonly SampledCurve[];
+  /** Preferred operating region of each candidate set (flows of the set, m3/s). */
+  readonly preferredRegions: readonly {
+    readonly name: string;
+    readonly minFlow: number;
+    readonly maxFlow: number;
+  }[];
+  /** Operating point of each candidate in each case. */
+  readonly points: readonly {
+    readonly name: string;
+    readonly flow: number;
+    readonly head: number;
+  }[];
+}
+
+/** The report of a design evaluation. All numbers are SI; `units` says how to print them. */
+export interface DesignReport {
+  readonly name: string;
+  readonly units: UnitSystem;
+  readonly dutyFlow: Flow;
+  /** The liquid in the design case, in words: name, temperature, density. */
+  readonly fluid: string;
+  /** The duty in each operating case. */
+  readonly duty: readonly CaseDuty[];
+  /** Candidates, in rank order. */
+  readonly candidates: readonly CandidateReport[];
+  /** Checks that concern the system rather than a candidate. */
+  readonly checks: readonly Check[];
+  /** The usual engineering cautions; always present. */
+  readonly cautions: readonly string[];
+  /** True when no check anywhere is an error. */
+  readonly passed: boolean;
+  /** Curves for charts. */
+  readonly curves: ReportCurves;
+}
+
+/** Display units of each unit system (for renderers and the CLI). */
+export interface DisplayUnits {
+  readonly flow: UnitOf<'flow'>;
+  readonly head: UnitOf<'length'>;
+  readonly pressure: UnitOf<'pressure'>;
+  readonly power: UnitOf<'power'>;
+  readonly velocity: UnitOf<'velocity'>;
+  readonly speed: UnitOf<'rotationalSpeed'>;
+  readonly length: UnitOf<'length'>;
+}
