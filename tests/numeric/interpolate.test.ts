@@ -64,7 +64,8 @@ describe('monotoneCubic: laws (fast-check)', () => {
     .array(
       fc.tuple(
         fc.double({ min: 0.01, max: 10, noNaN: true }),
-        fc.double({ min: 0, max: 100, noNaN: true }),
+        // subnormal increments lose relative precision in any arithmetic: keep them out
+        fc.double({ min: 0, max: 100, noNaN: true }).map((v) => (v < 1e-300 ? 0 : v)),
       ),
       {
         minLength: 2,
