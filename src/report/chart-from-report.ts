@@ -1,0 +1,78 @@
+/**
+ * The chart of a design report: its sampled curves, operating points and preferred regions
+ * mapped to the {@link ChartSpec} that `renderChart` draws.
+ *
+ * @module
+ */
+import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
+import { argumentError } from '../errors';
+import type { ChartSeries, ChartSpec } from './chart-spec';
+import { chosenUnits } from './format-values';
+import { displayUnits } from './units';
+
+/** Options of {@link chartSpecFromReport}. */
+export interface ChartFromReportOptions {
+  /** Units of the axes; default the report's own (`report.units`). */
+  readonly units?: UnitSystem;
+}
+
+function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
+  return curves.map((c, i) => {
+    if (c.flows.length !== c.values.length) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `${path}[${i}].values`,
+        `${c.values.length} values for ${c.flows.length} flows`,
+        undefined,
+        'as many values as flows',
+      );
+    }
+    return {
+      name: c.name,
+      points: c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) })),
+    };
+  });
+}
+
+/**
+ * Maps a report's curves (`report.curves`, SI) to a chart: system curves per operating case,
+ * pump curves per candidate and speed, efficiency and NPSH-required curves per candidate,
+ * NPSH available per case, the preferred operating regions and every operating point. The
+ * title is the report's name; the axes are in the flow and head units of
+ * {@link displayUnits} (`m3/h` and `m`, or `gal/min` and `ft`). The numbers stay SI: the
+ * chart converts them for its axes.
+ *
+ * @param report - a report from `evaluateDesign`
+ * @param options - `units` (`'si'` or `'us'`, default `report.units`)
+ * @returns a {@link ChartSpec} for `renderChart`
+ * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'` or a sampled
+ *   curve with fewer values than flows. (`renderChart` then checks the numbers themselves:
+ *   a report without any curve cannot be drawn.)
+ * @example
+ * ```ts
+ * const svg = renderChart(chartSpecFromReport(report, { units: 'us' }));
+ * chartSpecFromReport(report, { units: 'us' }).units; // { flow: 'gal/min', head: 'ft' }
+ * ```
+ */
+export function chartSpecFromReport(
+  report: DesignReport,
+  options: ChartFromReportOptions = {},
+): ChartSpec {
+  const u = displayUnits(chosenUnits(report, options.units));
+  const c = report.curves;
+  return {
+    title: report.name,
+    units: { flow: u.flow, head: u.head },
+    pumpCurves: series('curves.pumps', c.pumps),
+    systemCurves: series('curves.systems', c.systems),
+    operatingPoints: c.points.map((p) => ({ name: p.name, flow: p.flow, head: p.head })),
+    preferredRegions: c.preferredRegions.map((r) => ({
+      name: r.name,
+      minFlow: r.minFlow,
+      maxFlow: r.maxFlow,
+    })),
+    efficiencyCurves: series('curves.efficiency', c.efficiency),
+    npshRequired: series('curves.npshRequired', c.npshRequired),
+    npshAvailable: series('curves.npshAvailable', c.npshAvailable),
+  };
+}

@@ -1,0 +1,403 @@
+/**
+ * The design report as self-describing JSON: a versioned envelope in which every quantity is
+ * a number in the chosen display unit beside its unit symbol.
+ *
+ * @module
+ */
+import type {
+  CandidateReport,
+  CaseDuty,
+  CaseResult,
+  Check,
+  DesignReport,
+  DisplayUnits,
+  SampledCurve,
+  UnitSystem,
+} from '../design/index';
+import type { MotorRating } from '../pumps/index';
+import type { RunDetails } from '../system/index';
+import { convert, type Dimension, type Quantity, si, to, type UnitOf } from '../units/index';
+import { chosenUnits } from './format-values';
+import { displayUnits } from './units';
+
+/** The `format` tag of the envelope; the number changes when the shape changes incompatibly. */
+export const REPORT_FORMAT = 'headflow-report/1';
+
+/** Significant digits of every number written. */
+const DIGITS = 6;
+
+/** A quantity: the number in `unit` (a unit symbol of the catalogue). */
+export interface JsonQuantity {
+  readonly value: number;
+  readonly unit: string;
+}
+
+/** Sampled values of one quantity, all in `unit` (`'1'` for a fraction such as efficiency). */
+export interface JsonSamples {
+  readonly unit: string;
+  readonly values: readonly (number | null)[];
+}
+
+/** A curve: `value.values[i]` at `flow.values[i]`. */
+export interface JsonCurve {
+  readonly name: string;
+  readonly flow: JsonSamples;
+  readonly value: JsonSamples;
+}
+
+/** The units of the envelope: the display units and the unit of yearly energy. */
+export interface JsonUnits extends DisplayUnits {
+  readonly energy: 'kWh';
+}
+
+/** A check; `siValues` are the numbers behind it as the evaluation wrote them, coherent SI. */
+export interface JsonCheck {
+  readonly id: string;
+  readonly severity: Check['severity'];
+  readonly candidate: string | null;
+  readonly case: string | null;
+  readonly message: string;
+  readonly source: string;
+  readonly siValues: Readonly<Record<string, number | null>>;
+}
+
+/** One run's figures at the duty flow. */
+export interface JsonRun {
+  readonly name: string;
+  readonly group: string | null;
+  readonly flow: JsonQuantity | null;
+  readonly insideDiameter: JsonQuantity | null;
+  readonly velocity: JsonQuantity | null;
+  readonly reynolds: number | null;
+  readonly regime: RunDetails['regime'];
+  readonly frictionFactor: number | null;
+  readonly pipeLoss: JsonQuantity | null;
+  readonly fittingsLoss: JsonQuantity | null;
+  readonly componentLoss: JsonQuantity | null;
+  readonly totalLoss: JsonQuantity | null;
+  readonly pressureDrop: JsonQuantity | null;
+  readonly elevationChange: JsonQuantity | null;
+}
+
+/** The duty in one operating case. */
+export interface JsonCaseDuty {
+  readonly case: string;
+  readonly head: JsonQuantity | null;
+  readonly staticHead: JsonQuantity | null;
+  readonly lossHead: JsonQuantity | null;
+  readonly npshAvailable: JsonQuantity | null;
+  readonly runs: readonly JsonRun[];
+}
+
+/** Where a candidate runs in one case; every figure is null when `failure` says why not. */
+export interface JsonCaseResult {
+  readonly case: string;
+  readonly failure: string | null;
+  readonly speed: JsonQuantity | null;
+  readonly flow: JsonQuantity | null;
+  readonly head: JsonQuantity | null;
+  /** Fraction 0..1. */
+  readonly efficiency: number | null;
+  readonly shaftPower: JsonQuantity | null;
+  readonly percentOfBep: number | null;
+  readonly region: CaseResult['region'] | null;
+  readonly npshAvailable: JsonQuantity | null;
+  readonly npshRequired: JsonQuantity | null;
+  readonly npshRatio: number | null;
+  readonly velocities: readonly { readonly run: string; readonly velocity: JsonQuantity | null }[];
+  readonly iterations: number;
+}
+
+/** A standard motor; `nameplate` is in the series' own unit (kW for IEC, hp for NEMA). */
+export interface JsonMotor {
+  readonly series: MotorRating['series'];
+  readonly rating: JsonQuantity | null;
+  readonly nameplate: JsonQuantity | null;
+  readonly loadFraction: number | null;
+  readonly serviceFactor: number | null;
+}
+
+/** A candidate's evaluation. */
+export interface JsonCandidate {
+  readonly name: string;
+  readonly rank: number;
+  readonly passed: boolean;
+  readonly count: number;
+  readonly arrangement: CandidateReport['arrangement'];
+  readonly control: CandidateReport['control'];
+  readonly cases: readonly JsonCaseResult[];
+  readonly maxShaftPower: JsonQuantity | null;
+  readonly motor: JsonMotor | null;
+  readonly dutyOnlyMotor: JsonMotor | null;
+  readonly energy: {
+    readonly yearly: JsonQuantity | null;
+    readonly cost: { readonly amount: number | null; readonly currency: string } | null;
+  } | null;
+  readonly checks: readonly JsonCheck[];
+}
+
+/** The curves behind the report, in display units. */
+export interface JsonCurves {
+  readonly systems: readonly JsonCurve[];
+  readonly pumps: readonly JsonCurve[];
+  readonly efficiency: readonly JsonCurve[];
+  readonly npshRequired: readonly JsonCurve[];
+  readonly npshAvailable: readonly JsonCurve[];
+  readonly preferredRegions: readonly {
+    readonly name: string;
+    readonly minFlow: JsonQuantity | null;
+    readonly maxFlow: JsonQuantity | null;
+  }[];
+  readonly points: readonly {
+    readonly name: string;
+    readonly flow: JsonQuantity | null;
+    readonly head: JsonQuantity | null;
+  }[];
+}
+
+/** The report itself; `units` is the unit system it was written in. */
+export interface JsonReport {
+  readonly name: string;
+  readonly units: UnitSystem;
+  readonly passed: boolean;
+  readonly fluid: string;
+  readonly dutyFlow: JsonQuantity | null;
+  readonly duty: readonly JsonCaseDuty[];
+  readonly candidates: readonly JsonCandidate[];
+  readonly checks: readonly JsonCheck[];
+  readonly cautions: readonly string[];
+  readonly curves: JsonCurves;
+}
+
+/** The whole JSON document. */
+export interface JsonEnvelope {
+  readonly format: typeof REPORT_FORMAT;
+  readonly units: JsonUnits;
+  readonly report: JsonReport;
+}
+
+/** A number to six significant digits; null when it is missing or not finite. */
+function round(x: number | undefined): number | null {
+  if (x === undefined || !Number.isFinite(x)) return null;
+  const r = Number(x.toPrecision(DIGITS));
+  return r === 0 ? 0 : r;
+}
+
+/** An SI quantity as `{ value, unit }` in a display unit; null when missing. */
+function quantity<D extends Dimension>(
+  x: Quantity<D> | undefined,
+  unit: UnitOf<D>,
+): JsonQuantity | null {
+  const value = x === undefined || !Number.isFinite(x) ? null : round(to(x, unit));
+  return value === null ? null : { value, unit };
+}
+
+function curve(c: SampledCurve, flowUnit: string, valueUnit: string, toValue: number): JsonCurve {
+  const flowFactor = convert(1, flowUnit, 'm3/s');
+  return {
+    name: c.name,
+    flow: { unit: flowUnit, values: c.flows.map((f) => round(f / flowFactor)) },
+    value: { unit: valueUnit, values: c.values.map((v) => round(v * toValue)) },
+  };
+}
+
+function check(c: Check): JsonCheck {
+  const siValues: Record<string, number | null> = {};
+  for (const [k, v] of Object.entries(c.values)) siValues[k] = round(v);
+  return {
+    id: c.id,
+    severity: c.severity,
+    candidate: c.candidate ?? null,
+    case: c.case ?? null,
+    message: c.message,
+    source: c.source,
+    siValues,
+  };
+}
+
+function run(r: RunDetails, u: DisplayUnits): JsonRun {
+  return {
+    name: r.name,
+    group: r.group ?? null,
+    flow: quantity(r.flow, u.flow),
+    insideDiameter: quantity(r.insideDiameter, u.length),
+    velocity: quantity(r.velocity, u.velocity),
+    reynolds: round(r.reynolds),
+    regime: r.regime,
+    frictionFactor: round(r.frictionFactor),
+    pipeLoss: quantity(r.pipeLoss, u.head),
+    fittingsLoss: quantity(r.fittingsLoss, u.head),
+    componentLoss: quantity(r.componentLoss, u.head),
+    totalLoss: quantity(r.totalLoss, u.head),
+    pressureDrop: quantity(r.pressureDrop, u.pressure),
+    elevationChange: quantity(r.elevationChange, u.head),
+  };
+}
+
+function duty(d: CaseDuty, u: DisplayUnits): JsonCaseDuty {
+  return {
+    case: d.case,
+    head: quantity(d.head, u.head),
+    staticHead: quantity(d.staticHead, u.head),
+    lossHead: quantity(d.lossHead, u.head),
+    npshAvailable: quantity(d.npshAvailable, u.head),
+    runs: d.runs.map((r) => run(r, u)),
+  };
+}
+
+function caseResult(r: CaseResult, u: DisplayUnits): JsonCaseResult {
+  return {
+    case: r.case,
+    failure: r.failure ?? null,
+    speed: quantity(r.speed, u.speed),
+    flow: quantity(r.flow, u.flow),
+    head: quantity(r.head, u.head),
+    efficiency: round(r.efficiency),
+    shaftPower: quantity(r.shaftPower, u.power),
+    percentOfBep: round(r.percentOfBep),
+    region: r.region ?? null,
+    npshAvailable: quantity(r.npshAvailable, u.head),
+    npshRequired: quantity(r.npshRequired, u.head),
+    npshRatio: round(r.npshRatio),
+    velocities: r.velocities.map((v) => ({
+      run: v.run,
+      velocity: quantity(v.velocity, u.velocity),
+    })),
+    iterations: r.iterations,
+  };
+}
+
+function motor(m: MotorRating | undefined, u: DisplayUnits): JsonMotor | null {
+  if (m === undefined) return null;
+  const nameplate = round(m.nameplate);
+  return {
+    series: m.series,
+    rating: quantity(m.rating, u.power),
+    nameplate: nameplate === null ? null : { value: nameplate, unit: m.unit },
+    loadFraction: round(m.loadFraction),
+    serviceFactor: round(m.serviceFactor),
+  };
+}
+
+function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
+  const e = c.energy;
+  const kWh = e === undefined ? null : round(e.kWh);
+  return {
+    name: c.name,
+    rank: c.rank,
+    passed: c.passed,
+    count: c.count,
+    arrangement: c.arrangement,
+    control: c.control,
+    cases: c.cases.map((r) => caseResult(r, u)),
+    maxShaftPower: quantity(c.maxShaftPower, u.power),
+    motor: motor(c.motor, u),
+    dutyOnlyMotor: motor(c.dutyOnlyMotor, u),
+    energy:
+      e === undefined
+        ? null
+        : {
+            yearly: kWh === null ? null : { value: kWh, unit: 'kWh' },
+            cost:
+              e.cost === undefined
+                ? null
+                : { amount: round(e.cost.amount), currency: e.cost.currency },
+          },
+    checks: c.checks.map(check),
+  };
+}
+
+function curves(report: DesignReport, u: DisplayUnits): JsonCurves {
+  const c = report.curves;
+  const head = 1 / convert(1, u.head, 'm');
+  return {
+    systems: c.systems.map((s) => curve(s, u.flow, u.head, head)),
+    pumps: c.pumps.map((s) => curve(s, u.flow, u.head, head)),
+    efficiency: c.efficiency.map((s) => curve(s, u.flow, '1', 1)),
+    npshRequired: c.npshRequired.map((s) => curve(s, u.flow, u.head, head)),
+    npshAvailable: c.npshAvailable.map((s) => curve(s, u.flow, u.head, head)),
+    preferredRegions: c.preferredRegions.map((r) => ({
+      name: r.name,
+      minFlow: quantity(si<'flow'>(r.minFlow), u.flow),
+      maxFlow: quantity(si<'flow'>(r.maxFlow), u.flow),
+    })),
+    points: c.points.map((p) => ({
+      name: p.name,
+      flow: quantity(si<'flow'>(p.flow), u.flow),
+      head: quantity(si<'length'>(p.head), u.head),
+    })),
+  };
+}
+
+/**
+ * The report as a plain object ready for `JSON.stringify`: the envelope of
+ * {@link renderJson}, with every quantity converted to the display units of `units` and
+ * rounded to six significant digits, and every missing value `null`.
+ *
+ * @param report - a report from `evaluateDesign`
+ * @param units - `'si'` or `'us'`; default `report.units`
+ * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'`.
+ * @example
+ * ```ts
+ * const plain = reportToPlain(report, 'us');
+ * plain.report.dutyFlow; // { value: 1200, unit: 'gal/min' } for a duty of 1200 gal/min
+ * ```
+ */
+export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnvelope {
+  const system = chosenUnits(report, units);
+  const u = displayUnits(system);
+  return {
+    format: REPORT_FORMAT,
+    units: { ...u, energy: 'kWh' },
+    report: {
+      name: report.name,
+      units: system,
+      passed: report.passed,
+      fluid: report.fluid,
+      dutyFlow: quantity(report.dutyFlow, u.flow),
+      duty: report.duty.map((d) => duty(d, u)),
+      candidates: report.candidates.map((c) => candidate(c, u)),
+      checks: report.checks.map(check),
+      cautions: [...report.cautions],
+      curves: curves(report, u),
+    },
+  };
+}
+
+/** Options of {@link renderJson}. */
+export interface JsonOptions {
+  /** Units to write in; default the report's own (`report.units`). */
+  readonly units?: UnitSystem;
+}
+
+/**
+ * Writes a design report as stable, pretty JSON (two-space indent, fixed key order, a final
+ * newline) in a versioned envelope:
+ *
+ * ```json
+ * { "format": "headflow-report/1", "units": { "flow": "m3/h", ... }, "report": { ... } }
+ * ```
+ *
+ * Every quantity is an object `{ "value": 272.5, "unit": "m3/h" }` with the number in the
+ * chosen display unit (see {@link displayUnits}; yearly energy in kWh, motor nameplates in
+ * their series' unit), so the file explains itself; dimensionless numbers (efficiency and
+ * load as fractions, % of BEP, NPSH ratio, Reynolds number) are plain numbers. Numbers are
+ * rounded to six significant digits (a relative change of at most 5e-6), enough to read the
+ * values back to SI well within engineering precision. A missing value is `null`. The
+ * numbers behind each check are written unconverted, in coherent SI, as `siValues`.
+ * Curves are written as `{ name, flow: { unit, values }, value: { unit, values } }`.
+ *
+ * @param report - a report from `evaluateDesign`
+ * @param options - `units` (`'si'` or `'us'`, default `report.units`)
+ * @returns the JSON text
+ * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'`.
+ * @example
+ * ```ts
+ * const doc = JSON.parse(renderJson(report, { units: 'si' }));
+ * doc.format; // 'headflow-report/1'
+ * doc.report.dutyFlow; // { value: 272.5, unit: 'm3/h' } for a duty of 272.5 m3/h
+ * ```
+ */
+export function renderJson(report: DesignReport, options: JsonOptions = {}): string {
+  return `${JSON.stringify(reportToPlain(report, options.units), null, 2)}\n`;
+}
