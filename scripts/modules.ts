@@ -3,4 +3,13 @@
  * tsup builds one entry per name and tests/package.test.ts checks that package.json's
  * "exports" map lists exactly these. Add a module here when it lands.
  */
-export const publicModules = ['units', 'fluids', 'pipes', 'friction', 'losses', 'system', 'pumps', 'design'] as const;
+export const publicModules = [
+  'units',
+  'fluids',
+  'pipes',
+  'friction',
+  'losses',
+  'system',
+  'pumps',
+  'design',
+] as const;

@@ -5,9 +5,10 @@
  *
  * @packageDocumentation
  */
+
+export * from './design/index';
 export { HeadflowError, type HeadflowErrorCode, type HeadflowErrorDetails } from './errors';
 export * from './fluids/index';
-export * from './design/index';
 export * from './friction/index';
 export * from './losses/index';
 export * from './pipes/index';

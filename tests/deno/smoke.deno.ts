@@ -3,7 +3,15 @@
  * numbers. Run by `npm run test:deno` after `npm run build` (part of `npm test`).
  */
 // @ts-nocheck: checked by Deno against dist/, which does not exist at typecheck time
-import { colebrook, evaluateDesign, frictionFactor, pipeSize, q, to, water } from '../../dist/index.js';
+import {
+  colebrook,
+  evaluateDesign,
+  frictionFactor,
+  pipeSize,
+  q,
+  to,
+  water,
+} from '../../dist/index.js';
 
 let passed = 0;
 let failed = 0;
@@ -11,7 +19,9 @@ function close(name: string, actual: number, expected: number, tol: number): voi
   const ok = Math.abs(actual - expected) <= tol * Math.abs(expected);
   if (ok) passed++;
   else failed++;
-  console.log(`${ok ? 'ok  ' : 'FAIL'} ${name}: ${actual} (expected ${expected}, tolerance ${tol})`);
+  console.log(
+    `${ok ? 'ok  ' : 'FAIL'} ${name}: ${actual} (expected ${expected}, tolerance ${tol})`,
+  );
 }
 
 // 1200 US gal/min = 272.549648448 m3/h exactly (NIST SP 811: gal = 3.785411784 L)
@@ -20,7 +30,12 @@ close('units', to(q(1200, 'gal/min'), 'm3/h'), 272.549648448, 1e-14);
 close('water density', water().at(q(300, 'K'), q(3, 'MPa')).density, 1 / 0.100215168e-2, 1e-8);
 // Colebrook residual at the returned f is zero to machine precision
 const f = colebrook(1e5, 1e-4);
-close('colebrook residual', 1 / Math.sqrt(f), -2 * Math.log10(1e-4 / 3.7 + 2.51 / (1e5 * Math.sqrt(f))), 1e-14);
+close(
+  'colebrook residual',
+  1 / Math.sqrt(f),
+  -2 * Math.log10(1e-4 / 3.7 + 2.51 / (1e5 * Math.sqrt(f))),
+  1e-14,
+);
 close('friction factor policy', frictionFactor(1000, 1e-4), 0.064, 1e-15);
 // ASME B36.10M: NPS 4 schedule 40 is 4.500 in OD, 0.237 in wall: ID 4.026 in
 close('pipe size', to(pipeSize('4', '40').insideDiameter, 'in'), 4.026, 1e-12);
