@@ -1,0 +1,99 @@
+/**
+ * The scenario file: a JSON description of a whole design (fluid, the two ends of the system,
+ * the line of pipe runs, operating cases, duty, candidate pumps, duty profile, energy price
+ * and check limits), every quantity written with its unit. {@link readScenario} reads one
+ * into a {@link DesignInput}; {@link scenarioSchema} is the valibot schema behind it.
+ *
+ * @module
+ */
+import * as v from 'valibot';
+import { HeadflowError } from '../errors';
+import { assembleDesign } from './scenario-build';
+import { ScenarioFileError, scenarioIssues } from './scenario-issues';
+import { SCENARIO_FORMAT, scenarioObject } from './scenario-schema';
+import type { DesignInput } from './types';
+
+export { SCENARIO_FORMAT };
+
+/**
+ * The valibot schema of a scenario file (format `headflow-scenario/1`). Parsing a file with it
+ * gives the {@link DesignInput}; its issues carry the path of each problem in the file. Most
+ * callers want {@link readScenario}, which turns the issues into one {@link ScenarioFileError}.
+ */
+export const scenarioSchema = v.pipe(
+  scenarioObject,
+  v.rawTransform<v.InferOutput<typeof scenarioObject>, DesignInput>(
+    (ctx) => assembleDesign(ctx, ctx.dataset.value) ?? ctx.NEVER,
+  ),
+);
+
+/** Options of {@link readScenario}. */
+export interface ReadScenarioOptions {
+  /** Name of the file (or other source) for messages, for example `'pump-station.json'`. */
+  readonly source?: string;
+}
+
+/** Line and column (1-based) of a character offset in a text. */
+function lineAndColumn(text: string, offset: number): string {
+  const before = text.slice(0, offset);
+  const line = before.split('\n').length;
+  const column = offset - before.lastIndexOf('\n');
+  return `line ${line}, column ${column}`;
+}
+
+function parseJson(text: string, source: string | undefined): unknown {
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    const said = e instanceof Error ? e.message : String(e);
+    const position = /position (\d+)/.exec(said);
+    const where =
+      position === null || position[1] === undefined
+        ? ''
+        : ` (${lineAndColumn(text, Number(position[1]))})`;
+    const name = source === undefined ? 'the scenario file' : `scenario file ${source}`;
+    throw new HeadflowError('INVALID_ARGUMENT', `${name} is not valid JSON${where}: ${said}`, {
+      parameter: 'json',
+      allowed: 'a JSON text',
+    });
+  }
+}
+
+/**
+ * Reads a scenario file into a design input for `evaluateDesign`.
+ *
+ * Every quantity in the file is text with its unit (`"350 ft"`, `"40 L/s"`, `"45 psi"`,
+ * `"20 degC"`) and comes out in SI. Pressures named `pressure` are absolute; those named
+ * `gaugePressure` are gauge and are made absolute with the file's `atmosphere` (default the
+ * standard atmosphere, 101 325 Pa); an end with neither is open to the atmosphere. Unknown
+ * fields are errors. The format is described field by field in docs/scenario-format.md.
+ *
+ * @param json - the file's text, or its already-parsed value
+ * @param options - `source`: the file's name, for messages
+ * @returns the design input
+ * @throws HeadflowError `INVALID_ARGUMENT` for text that is not JSON (with the parser's line
+ *   and column). {@link ScenarioFileError} (a HeadflowError) for a file that does not describe
+ *   a design: its message lists every problem with its path in the file (for example
+ *   `line[2].run.length`), what was expected and what was found; its `issues` hold them one
+ *   by one, and its `code` is the first problem's: `INVALID_ARGUMENT` for a wrong shape, type
+ *   or value, `UNKNOWN_UNIT` or `WRONG_DIMENSION` where a unit is at fault, `UNKNOWN_NAME` for
+ *   an unknown fitting, material or schedule, `OUT_OF_RANGE` for a pipe size a standard does
+ *   not list or a fluid outside its data (water boiling at the suction).
+ * @example
+ * ```ts
+ * const design = readScenario(readFileSync('lift.json', 'utf8'), { source: 'lift.json' });
+ * to(design.dutyFlow, 'L/s'); // 40, when the file says "duty": { "flow": "40 L/s" }
+ * ```
+ */
+export function readScenario(json: unknown, options: ReadScenarioOptions = {}): DesignInput {
+  const value = typeof json === 'string' ? parseJson(json, options.source) : json;
+  const result = v.safeParse(scenarioSchema, value);
+  if (result.success) return result.output;
+  const issues = scenarioIssues(result.issues);
+  if (issues === undefined) {
+    throw new HeadflowError('INVALID_ARGUMENT', 'the scenario file could not be read.');
+  }
+  throw new ScenarioFileError(issues, options.source);
+}
+
+export { ScenarioFileError, type ScenarioIssue } from './scenario-issues';

@@ -1,0 +1,270 @@
+/**
+ * The leaf values of a scenario file: quantities written with their unit (`"350 ft"`),
+ * fractions that may be percentages (`0.72` or `"72 %"`), whole numbers, names and choices.
+ * Each is a valibot schema whose issues name what was expected and what was found.
+ *
+ * @module
+ */
+import * as v from 'valibot';
+import { HeadflowError } from '../errors';
+import {
+  type Dimension,
+  isUnit,
+  parseQuantity,
+  type Quantity,
+  UNITS,
+  unitsOf,
+} from '../units/index';
+import { expecting, found, report } from './scenario-issues';
+
+/** A number followed by a unit, as `parseQuantity` reads it (for editors; the reader decides). */
+export const QUANTITY_PATTERN = '^\\s*[+-]?(\\d[\\d,]*(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?\\s*\\S+';
+
+/** Plain name and an example of each dimension used in scenario files. */
+const WORDS: Partial<Record<Dimension, readonly [string, string]>> = {
+  length: ['a length', '350 ft'],
+  flow: ['a flow', '1200 gal/min'],
+  pressure: ['a pressure', '45 psi'],
+  temperature: ['a temperature', '20 degC'],
+  density: ['a density', '998 kg/m3'],
+  dynamicViscosity: ['a dynamic viscosity', '1.0 cP'],
+  kinematicViscosity: ['a kinematic viscosity', '1.0 cSt'],
+  rotationalSpeed: ['a speed', '1750 rpm'],
+  power: ['a power', '15 kW'],
+  velocity: ['a velocity', '2 m/s'],
+  acceleration: ['an acceleration', '9.81 m/s2'],
+};
+
+function words(dimension: Dimension): readonly [string, string] {
+  return WORDS[dimension] ?? [`a ${dimension}`, `1 ${dimension}`];
+}
+
+/** What a quantity must satisfy besides its dimension. */
+export type Bound = 'any' | 'nonNegative' | 'positive';
+
+const BOUND_WORDS: Record<Bound, string> = {
+  any: '',
+  nonNegative: ' >= 0',
+  positive: ' > 0',
+};
+
+function within(value: number, bound: Bound): boolean {
+  if (bound === 'nonNegative') return value >= 0;
+  if (bound === 'positive') return value > 0;
+  return true;
+}
+
+/** Why `text` is not a quantity of `dimension`, from the error `parseQuantity` threw. */
+function why(e: HeadflowError, dimension: Dimension): string {
+  if (e.code === 'WRONG_DIMENSION' && isUnit(e.unit)) {
+    return `, which is ${words(UNITS[e.unit].dimension)[0]}`;
+  }
+  if (e.code === 'UNKNOWN_UNIT') {
+    const known = unitsOf(dimension).join(', ');
+    return `: ${found(e.value)} is not a known unit (units of ${words(dimension)[0].replace(/^an? /, '')}: ${known})`;
+  }
+  if (e.code === 'OUT_OF_RANGE') return ': below absolute zero';
+  const hint = /\)\.\s+(.+?)\.?$/.exec(e.message)?.[1];
+  return hint === undefined ? '' : `: ${hint.charAt(0).toLowerCase()}${hint.slice(1)}`;
+}
+
+/** The raw-transform context, as far as the readers here use it. */
+type Context = Parameters<Parameters<typeof v.rawTransform<unknown, unknown>>[0]>[0];
+
+/**
+ * Parses the value as a quantity of one of `dimensions`; reports a missing unit, an unknown
+ * unit, a wrong dimension or a value out of bounds, with the code `parseQuantity` gives.
+ */
+function readQuantity(
+  ctx: Context,
+  dimensions: readonly [Dimension, ...Dimension[]],
+  bound: Bound,
+): { readonly value: number; readonly dimension: Dimension } | undefined {
+  const input = ctx.dataset.value;
+  const wanted = `${dimensions.map((d) => words(d)[0]).join(' or ')}${BOUND_WORDS[bound]} with its unit, such as ${dimensions.map((d) => `"${words(d)[1]}"`).join(' or ')}`;
+  if (typeof input !== 'string') {
+    const hint =
+      typeof input === 'number' ? ' (write a quantity as text: a number and its unit)' : '';
+    report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}${hint}`);
+    return undefined;
+  }
+  let first: HeadflowError | undefined;
+  for (const dimension of dimensions) {
+    try {
+      const value = parseQuantity(input, dimension);
+      if (!within(value, bound)) {
+        report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
+        return undefined;
+      }
+      return { value, dimension };
+    } catch (e) {
+      if (!(e instanceof HeadflowError)) throw e;
+      first ??= e;
+    }
+  }
+  const error = first as HeadflowError;
+  report(ctx, error.code, `expected ${wanted}, found ${found(input)}${why(error, dimensions[0])}`);
+  return undefined;
+}
+
+/** JSON Schema words for a quantity field (editors only; the reader parses the text). */
+function quantityMetadata(dimensions: readonly [Dimension, ...Dimension[]], bound: Bound) {
+  const names = dimensions.map((d) => words(d)[0]).join(' or ');
+  return v.metadata({
+    type: 'string',
+    pattern: QUANTITY_PATTERN,
+    description: `${names}${BOUND_WORDS[bound]}: a number and a unit symbol`,
+    examples: dimensions.map((d) => words(d)[1]),
+  });
+}
+
+/**
+ * A quantity of `dimension` written as text with its unit (`"350 ft"`), read into SI.
+ * Wrong unit or dimension is an issue at the field's path with the code `parseQuantity` gives
+ * (`UNKNOWN_UNIT`, `WRONG_DIMENSION`, `INVALID_ARGUMENT`, `OUT_OF_RANGE` below absolute zero).
+ */
+export function quantity<D extends Dimension>(dimension: D, bound: Bound = 'any') {
+  return v.pipe(
+    v.unknown(),
+    quantityMetadata([dimension], bound),
+    v.rawTransform<unknown, Quantity<D>>((ctx) => {
+      const r = readQuantity(ctx, [dimension], bound);
+      return r === undefined ? ctx.NEVER : (r.value as Quantity<D>);
+    }),
+  );
+}
+
+/** A viscosity, dynamic (`"30 cP"`) or kinematic (`"34 cSt"`), read into SI with its kind. */
+export function viscosity() {
+  const dims: readonly [Dimension, ...Dimension[]] = ['dynamicViscosity', 'kinematicViscosity'];
+  return v.pipe(
+    v.unknown(),
+    quantityMetadata(dims, 'positive'),
+    v.rawTransform<
+      unknown,
+      { readonly value: number; readonly kind: 'dynamicViscosity' | 'kinematicViscosity' }
+    >((ctx) => {
+      const r = readQuantity(ctx, dims, 'positive');
+      if (r === undefined) return ctx.NEVER;
+      return {
+        value: r.value,
+        kind: r.dimension === 'kinematicViscosity' ? 'kinematicViscosity' : 'dynamicViscosity',
+      };
+    }),
+  );
+}
+
+const PERCENT = /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*%\s*$/;
+
+/**
+ * A fraction in (0, 1] (or [0, 1] with `allowZero`): a number (`0.72`) or a percentage
+ * (`"72 %"`).
+ */
+export function fraction(allowZero = false) {
+  const range = allowZero ? '0 to 1' : 'above 0 and at most 1';
+  const wanted = `a fraction ${range} (0.72) or a percentage ("72 %")`;
+  return v.pipe(
+    v.unknown(),
+    v.metadata({
+      anyOf: [
+        { type: 'number', ...(allowZero ? { minimum: 0 } : { exclusiveMinimum: 0 }), maximum: 1 },
+        { type: 'string', pattern: PERCENT.source },
+      ],
+      description: `${wanted}`,
+    }),
+    v.rawTransform<unknown, number>((ctx) => {
+      const input = ctx.dataset.value;
+      let value: number | undefined;
+      if (typeof input === 'number') value = input;
+      else if (typeof input === 'string') {
+        const m = PERCENT.exec(input);
+        if (m !== null) value = Number(m[1]) / 100;
+      }
+      if (
+        value === undefined ||
+        !Number.isFinite(value) ||
+        value > 1 ||
+        value < 0 ||
+        (value === 0 && !allowZero)
+      ) {
+        report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
+        return ctx.NEVER;
+      }
+      return value;
+    }),
+  );
+}
+
+/** A plain number within [min, max] (finite). */
+export function plainNumber(
+  what: string,
+  min: number,
+  max = Number.POSITIVE_INFINITY,
+  open = false,
+) {
+  const range =
+    max === Number.POSITIVE_INFINITY ? `${open ? '>' : '>='} ${min}` : `from ${min} to ${max}`;
+  const wanted = `${what} (a number ${range})`;
+  return v.pipe(
+    v.unknown(),
+    v.metadata({
+      type: 'number',
+      ...(open ? { exclusiveMinimum: min } : { minimum: min }),
+      ...(max === Number.POSITIVE_INFINITY ? {} : { maximum: max }),
+      description: wanted,
+    }),
+    v.rawTransform<unknown, number>((ctx) => {
+      const input = ctx.dataset.value;
+      if (
+        typeof input !== 'number' ||
+        !Number.isFinite(input) ||
+        input > max ||
+        (open ? input <= min : input < min)
+      ) {
+        report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
+        return ctx.NEVER;
+      }
+      return input;
+    }),
+  );
+}
+
+/** A whole number >= min. */
+export function wholeNumber(what: string, min: number) {
+  const wanted = `${what} (a whole number >= ${min})`;
+  return v.pipe(
+    v.unknown(),
+    v.metadata({ type: 'integer', minimum: min, description: wanted }),
+    v.rawTransform<unknown, number>((ctx) => {
+      const input = ctx.dataset.value;
+      if (typeof input !== 'number' || !Number.isSafeInteger(input) || input < min) {
+        report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
+        return ctx.NEVER;
+      }
+      return input;
+    }),
+  );
+}
+
+/** A non-empty string (a name). */
+export function text(what: string) {
+  return v.pipe(
+    v.string(expecting(`${what} (text)`)),
+    v.minLength(1, expecting(`${what} (not empty)`)),
+    v.description(what),
+  );
+}
+
+/** One of a fixed set of words. */
+export function choice<const T extends readonly string[]>(what: string, options: T) {
+  const listed = options.map((o) => JSON.stringify(o)).join(', ');
+  return v.pipe(
+    v.picklist(options, expecting(`${what}: one of ${listed}`)),
+    v.description(`${what}: one of ${listed}`),
+  );
+}
+
+/** true or false. */
+export function flag(what: string) {
+  return v.pipe(v.boolean(expecting(`${what} (true or false)`)), v.description(what));
+}
