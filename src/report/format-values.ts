@@ -19,16 +19,17 @@ const MAX_DECIMALS = 6;
 /**
  * A number to `digits` significant digits in fixed notation (never an exponent), trailing
  * zeros kept so that columns line up: `35.09`, `12.00`, `1189`, `0.8500`. Large numbers
- * keep all their integer digits (`12346` at 4 digits). Non-finite or missing: a dash.
+ * keep all their integer digits (`123456` at 4 digits). Non-finite or missing: a dash.
  */
 export function formatNumber(x: number | undefined, digits = 4): string {
   if (x === undefined || !Number.isFinite(x)) return DASH;
-  const rounded = Number(x.toPrecision(digits));
+  // Whole numbers at or above 10^(digits - 1) keep every integer digit (no 1.235e+5).
+  const rounded = Math.abs(x) >= 10 ** (digits - 1) ? Math.round(x) : Number(x.toPrecision(digits));
   if (rounded === 0) return '0';
   const magnitude = Math.floor(Math.log10(Math.abs(rounded)));
   const decimals = Math.min(MAX_DECIMALS, Math.max(0, digits - 1 - magnitude));
   const text = rounded.toFixed(decimals);
-  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+  return Number(text) === 0 ? '0' : text;
 }
 
 /** A number with a fixed count of decimals (`78.2`), or a dash. */

@@ -118,7 +118,6 @@ function layoutTable(
   );
   const total = natural.reduce((a, b) => a + b, 0) + GAP.length * (natural.length - 1);
   if (total <= width) return drawTable(columns, rows, natural);
-  if (columns.length === 1) return drawTable(columns, rows, [width]);
   // The first column (the row's name) is repeated in every part; keep it to a third.
   const keyWidth = Math.min(natural[0] ?? 1, Math.max(8, Math.floor(width / 3)));
   const room = width - keyWidth - GAP.length;

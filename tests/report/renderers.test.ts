@@ -1,8 +1,15 @@
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { XMLValidator } from 'fast-xml-parser';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import type { CandidateReport, DesignReport } from '../../src/design/index';
 import { chartSpecFromReport } from '../../src/report/chart-from-report';
+import {
+  formatGrouped,
+  formatNumber,
+  formatShort,
+  formatWithUnit,
+} from '../../src/report/format-values';
 import { renderChart } from '../../src/report/index';
 import {
   type JsonEnvelope,
@@ -13,7 +20,7 @@ import {
 import { renderMarkdown } from '../../src/report/markdown';
 import { renderText } from '../../src/report/text';
 import { displayUnits } from '../../src/report/units';
-import { isUnit, q } from '../../src/units/index';
+import { isUnit, q, si } from '../../src/units/index';
 import { expectHeadflowError, expectRelative } from '../helpers/expect';
 import { AGED_CASE, DESIGN_CASE, REPORT } from './fixture';
 
@@ -96,6 +103,26 @@ function row(text: string, caseName: string, occurrence = 0): string[] {
 }
 
 describe('special values and bad options', () => {
+  it('formats numbers to significant digits without exponents, and missing ones as a dash', () => {
+    expect(formatNumber(undefined)).toBe('-');
+    expect(formatNumber(Number.NaN)).toBe('-');
+    expect(formatNumber(Number.NEGATIVE_INFINITY)).toBe('-');
+    expect(formatNumber(0)).toBe('0');
+    expect(formatNumber(-0)).toBe('0');
+    expect(formatNumber(-1e-9)).toBe('0'); // below the six decimals kept
+    expect(formatNumber(12)).toBe('12.00');
+    expect(formatNumber(9.9996)).toBe('10.00'); // rounding carries into a new digit
+    expect(formatNumber(123456)).toBe('123456');
+    expect(formatNumber(0.00012345)).toBe('0.000123');
+    expect(formatNumber(-35.094)).toBe('-35.09');
+    expect(formatGrouped(-1234567.4)).toBe('-1,234,567');
+    expect(formatGrouped(999)).toBe('999');
+    expect(formatShort(Number.NaN)).toBe('-');
+    expect(formatShort(1 / 3)).toBe('0.3333');
+    expect(formatWithUnit(undefined, 'm')).toBe('-');
+    expect(formatWithUnit(si<'flow'>(Number.NaN), 'm3/h')).toBe('-');
+  });
+
   it('missing values print as a dash and never as NaN or undefined', () => {
     for (const out of allOutputs(REPORT)) {
       expect(out).not.toMatch(/NaN|undefined|Infinity/);
@@ -360,6 +387,14 @@ describe('text report', () => {
     expect(noCases).toContain('No operating case was evaluated.');
   });
 
+  it('a check about the whole system says so', () => {
+    const report: DesignReport = {
+      ...REPORT,
+      checks: [{ ...(REPORT.checks[0] ?? expect.fail('fixture')), case: undefined }],
+    };
+    expect(folded(renderText(report))).toContain('[suction-velocity] system: Suction velocity');
+  });
+
   it('defaults to the units of the report', () => {
     expect(renderText({ ...REPORT, units: 'us' })).toBe(renderText(REPORT, { units: 'us' }));
   });
@@ -402,6 +437,15 @@ describe('Markdown report', () => {
       expect(plain).toContain(`(source: ${c.source})`);
     }
     for (const c of REPORT.cautions) expect(plain).toContain(`- ${c}`);
+  });
+
+  it('writes paragraphs for empty sections', () => {
+    const out = renderMarkdown({ ...REPORT, candidates: [], checks: [], duty: [], cautions: [] });
+    expect(out).toContain('## Duty by operating case\n\nNo operating case was evaluated.\n');
+    expect(out).toContain('### Errors (0)\n\nNone.\n');
+    expect(out).toMatch(
+      /## Cautions\n\n- Results support, and do not replace, licensed engineering/,
+    );
   });
 
   it('every table row has as many cells as its header, and a rule row', () => {
@@ -672,5 +716,32 @@ describe('chart from a report', () => {
     };
     const err = expectHeadflowError(() => chartSpecFromReport(bad), 'INVALID_ARGUMENT');
     expect(err.parameter).toBe('curves.systems[0].values');
+  });
+});
+
+describe('the guide (docs/reports.md)', () => {
+  const body = (code: string): string => code.slice(code.indexOf('const report ='));
+  it('its sample is the checked example file below the imports', () => {
+    const page = readFileSync(new URL('../../docs/reports.md', import.meta.url), 'utf8');
+    const block = /```ts\n([\s\S]*?)```/.exec(page)?.[1] ?? '';
+    const file = readFileSync(new URL('./guide-example.ts', import.meta.url), 'utf8');
+    expect(body(block)).toBe(body(file));
+    expect(block).toContain("from 'headflow/report'");
+  });
+  it('runs and prints what its comments say', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    await import('./guide-example');
+    const lines = log.mock.calls.map((c) =>
+      c.map((x) => (typeof x === 'string' ? x : JSON.stringify(x))).join(' '),
+    );
+    log.mockRestore();
+    // The first lines come from the cooling-loop example it imports; the guide prints the last five.
+    expect(lines.slice(-5)).toEqual([
+      'Pump selection report: process cooling loop',
+      '# Pump selection report: process cooling loop',
+      'headflow-report/1',
+      '{"value":105,"unit":"m3/h"}',
+      'true',
+    ]);
   });
 });

@@ -1,0 +1,29 @@
+// The sample of docs/reports.md. Until the renderers are exported from 'headflow/report',
+// this file imports them from the source files; below the imports it equals the docs' sample.
+
+import { design } from '../../docs/examples/cooling-loop';
+import { evaluateDesign } from '../../src/design/index';
+import { chartSpecFromReport } from '../../src/report/chart-from-report';
+import { renderChart } from '../../src/report/index';
+import { type JsonEnvelope, renderJson } from '../../src/report/json';
+import { renderMarkdown } from '../../src/report/markdown';
+import { renderText } from '../../src/report/text';
+
+const report = evaluateDesign(design);
+
+// Plain text for a terminal: 80 characters wide, US customary units.
+const text = renderText(report, { units: 'us', width: 80 });
+console.log(text.split('\n')[0]); // Pump selection report: process cooling loop
+
+// Markdown for a review document: the same content with pipe tables.
+const markdown = renderMarkdown(report);
+console.log(markdown.split('\n')[0]); // # Pump selection report: process cooling loop
+
+// JSON for other programs: every quantity as { value, unit } in the chosen units.
+const json = JSON.parse(renderJson(report, { units: 'si' })) as JsonEnvelope;
+console.log(json.format); // headflow-report/1
+console.log(json.report.dutyFlow); // { value: 105, unit: 'm3/h' }
+
+// The chart of the same curves and operating points, as one SVG document.
+const svg = renderChart(chartSpecFromReport(report, { units: 'si' }));
+console.log(svg.includes('</svg>')); // true
