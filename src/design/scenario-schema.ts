@@ -7,6 +7,7 @@
  * @module
  */
 import * as v from 'valibot';
+import { argumentError } from '../errors';
 import {
   constantFluid,
   type Fluid,
@@ -55,19 +56,34 @@ export const SCENARIO_FORMAT = 'headflow-scenario/1';
 
 const opt = v.exactOptional;
 
+/** `schema` with a description for editors (the JSON Schema's `description`). */
+function about<S extends v.GenericSchema>(schema: S, description: string) {
+  return v.pipe(schema, v.description(description));
+}
+
 /**
  * A JSON object with exactly these fields (unknown fields are errors); the message names the
  * fields that are allowed.
  */
 function obj<const E extends v.ObjectEntries>(entries: E, what = 'an object') {
   const keys = Object.keys(entries).join(', ');
-  return v.strictObject(entries, (issue) => {
+  const schema = v.strictObject(entries, (issue) => {
     if (issue.expected === 'never') return `unknown field; the fields here are: ${keys}`;
     if (issue.input === undefined && issue.expected?.startsWith('"')) {
       return 'this field is required';
     }
     return `expected ${what} with the fields ${keys}, found ${found(issue.input)}`;
   });
+  // valibot takes a list for an object (its items as fields); a JSON list is not an object.
+  const inner = schema['~run'];
+  (schema as { '~run': typeof inner })['~run'] = (dataset, config) => {
+    if (Array.isArray(dataset.value)) {
+      v._addIssue(schema as Parameters<typeof v._addIssue>[0], 'type', dataset, config);
+      return dataset as unknown as ReturnType<typeof inner>;
+    }
+    return inner.call(schema, dataset, config);
+  };
+  return schema;
 }
 
 /** A JSON list of items; `min` items at least. */
@@ -181,8 +197,15 @@ const pipeSpec = v.pipe(
         standard: v.literal('steel'),
         size: nominalSize,
         schedule: catalogueName<SteelSchedule>('steel pipe schedule', STEEL_SCHEDULES, (s) => {
-          if (!(STEEL_SCHEDULES as readonly string[]).includes(s))
-            pipeSize('1', s as SteelSchedule);
+          if (!(STEEL_SCHEDULES as readonly string[]).includes(s)) {
+            throw argumentError(
+              'UNKNOWN_NAME',
+              'schedule',
+              s,
+              undefined,
+              `a steel pipe schedule: ${STEEL_SCHEDULES.join(', ')}`,
+            );
+          }
         }),
       }),
       obj({
@@ -291,7 +314,7 @@ const equipment = v.pipe(
 
 const runFields = {
   name: opt(text('run name')),
-  length: quantity('length', 'nonNegative'),
+  length: quantity('length', 'nonNegative', 'length of straight pipe'),
   pipe: opt(pipeSpec),
   insideDiameter: opt(quantity('length', 'positive')),
   material: opt(
@@ -300,11 +323,13 @@ const runFields = {
     ),
   ),
   roughness: opt(quantity('length', 'nonNegative')),
-  agedRoughness: opt(quantity('length', 'nonNegative')),
+  agedRoughness: opt(
+    quantity('length', 'nonNegative', 'wall roughness of aged pipe, for aged cases'),
+  ),
   fittings: opt(list(fittingCount, 'fittings')),
   valves: opt(list(valve, 'valves')),
   equipment: opt(list(equipment, 'equipment items')),
-  rise: opt(quantity('length')),
+  rise: opt(quantity('length', 'any', 'rise from inlet to outlet (reported only)')),
 };
 
 /** A pipe run: length, size, wall, fittings, valves, equipment. */
@@ -415,6 +440,7 @@ const fluidSchema = v.pipe(
     ),
     ['water', 'constant', 'table'],
   ),
+  v.description('the liquid: one of water, constant, table'),
   v.rawTransform<
     {
       water?: { temperature: Temperature };
@@ -491,11 +517,23 @@ const fluidSchema = v.pipe(
   }),
 );
 
+const ELEVATION = 'elevation of the surface or point above the datum';
+
 const endpointFields = (partial: boolean) => ({
-  elevation: partial ? opt(quantity('length')) : quantity('length'),
-  pressure: opt(quantity('pressure', 'nonNegative')),
-  gaugePressure: opt(quantity('pressure')),
-  velocityDiameter: opt(quantity('length', 'positive')),
+  elevation: partial
+    ? opt(quantity('length', 'any', ELEVATION))
+    : quantity('length', 'any', ELEVATION),
+  pressure: opt(quantity('pressure', 'nonNegative', 'absolute pressure on the surface')),
+  gaugePressure: opt(
+    quantity('pressure', 'any', 'gauge pressure on the surface (made absolute with atmosphere)'),
+  ),
+  velocityDiameter: opt(
+    quantity(
+      'length',
+      'positive',
+      'diameter whose mean velocity is the velocity here (a jet, a point in a pipe); omit for a still surface',
+    ),
+  ),
 });
 
 /** Where the liquid comes from or goes; `pressure` is absolute, `gaugePressure` is gauge. */
@@ -637,16 +675,25 @@ export const scenarioFields = {
   name: text('design name'),
   description: opt(v.string(expecting('a description (text)'))),
   units: opt(choice('units of the report', ['si', 'us'] as const)),
-  atmosphere: opt(quantity('pressure', 'positive')),
-  gravity: opt(quantity('acceleration', 'positive')),
+  atmosphere: opt(
+    quantity(
+      'pressure',
+      'positive',
+      'atmospheric pressure at the site (absolute), for gauge pressures and open surfaces; default 101325 Pa',
+    ),
+  ),
+  gravity: opt(quantity('acceleration', 'positive', 'gravity; default 9.80665 m/s2')),
   friction: opt(frictionSchema),
   aged: opt(flag('aged pipe in the design case')),
   fluid: fluidSchema,
-  suction: endpoint(false),
-  discharge: endpoint(false),
-  line: list(lineElement, 'line elements (runs and parallel groups)', 1),
+  suction: about(endpoint(false), 'where the liquid comes from (a surface or a point)'),
+  discharge: about(endpoint(false), 'where the liquid goes (a surface or a point)'),
+  line: about(
+    list(lineElement, 'line elements (runs and parallel groups)', 1),
+    'the line from suction to discharge, in flow order',
+  ),
   cases: opt(list(operatingCase, 'operating cases')),
-  duty: obj({ flow: quantity('flow', 'positive') }),
+  duty: about(obj({ flow: quantity('flow', 'positive') }), 'the flow the pumps must deliver'),
   pumpLocation: opt(
     obj({
       elevation: quantity('length'),

@@ -108,12 +108,17 @@ function readQuantity(
 }
 
 /** JSON Schema words for a quantity field (editors only; the reader parses the text). */
-function quantityMetadata(dimensions: readonly [Dimension, ...Dimension[]], bound: Bound) {
+function quantityMetadata(
+  dimensions: readonly [Dimension, ...Dimension[]],
+  bound: Bound,
+  meaning?: string,
+) {
   const names = dimensions.map((d) => words(d)[0]).join(' or ');
+  const lead = meaning === undefined ? '' : `${meaning}; `;
   return v.metadata({
     type: 'string',
     pattern: QUANTITY_PATTERN,
-    description: `${names}${BOUND_WORDS[bound]}: a number and a unit symbol`,
+    description: `${lead}${names}${BOUND_WORDS[bound]}: a number and a unit symbol`,
     examples: dimensions.map((d) => words(d)[1]),
   });
 }
@@ -123,10 +128,14 @@ function quantityMetadata(dimensions: readonly [Dimension, ...Dimension[]], boun
  * Wrong unit or dimension is an issue at the field's path with the code `parseQuantity` gives
  * (`UNKNOWN_UNIT`, `WRONG_DIMENSION`, `INVALID_ARGUMENT`, `OUT_OF_RANGE` below absolute zero).
  */
-export function quantity<D extends Dimension>(dimension: D, bound: Bound = 'any') {
+export function quantity<D extends Dimension>(
+  dimension: D,
+  bound: Bound = 'any',
+  meaning?: string,
+) {
   return v.pipe(
     v.unknown(),
-    quantityMetadata([dimension], bound),
+    quantityMetadata([dimension], bound, meaning),
     v.rawTransform<unknown, Quantity<D>>((ctx) => {
       const r = readQuantity(ctx, [dimension], bound);
       return r === undefined ? ctx.NEVER : (r.value as Quantity<D>);

@@ -1,0 +1,52 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import {
+  SCENARIO_SCHEMA_PATH,
+  scenarioJsonSchema,
+  scenarioJsonSchemaText,
+} from '../../scripts/scenario-schema';
+
+const committed = readFileSync(new URL(`../../${SCENARIO_SCHEMA_PATH}`, import.meta.url), 'utf8');
+
+type Node = Record<string, unknown>;
+
+describe('docs/scenario.schema.json', () => {
+  it('is what scripts/scenario-schema.ts generates (run it after changing the format)', () => {
+    expect(JSON.parse(committed)).toEqual(JSON.parse(scenarioJsonSchemaText()));
+  });
+
+  it('forbids unknown fields and requires the format, name, fluid, ends, line and duty', () => {
+    const schema = scenarioJsonSchema();
+    expect(schema.additionalProperties).toBe(false);
+    expect(schema.required).toEqual(
+      expect.arrayContaining(['format', 'name', 'fluid', 'suction', 'discharge', 'line', 'duty']),
+    );
+  });
+
+  it('describes quantities as text with a pattern, a description and an example', () => {
+    const properties = scenarioJsonSchema().properties as Record<string, Node>;
+    const duty = properties.duty as Node;
+    const flow = (duty.properties as Record<string, Node>).flow as Node;
+    expect(flow.type).toBe('string');
+    expect(typeof flow.pattern).toBe('string');
+    expect(flow.description).toContain('a flow > 0');
+    expect(flow.examples).toEqual(['1200 gal/min']);
+    const pattern = new RegExp(flow.pattern as string);
+    for (const ok of ['40 L/s', '1,200 gal/min', '2.5e-3 m3/s', '-1.2 m']) {
+      expect(pattern.test(ok), ok).toBe(true);
+    }
+    for (const bad of ['L/s', '', 'forty L/s']) expect(pattern.test(bad), bad).toBe(false);
+  });
+
+  it('writes the one-of rules of the reader', () => {
+    const properties = scenarioJsonSchema().properties as Record<string, Node>;
+    const fluid = properties.fluid as Node;
+    expect(fluid.oneOf).toEqual([
+      { required: ['water'] },
+      { required: ['constant'] },
+      { required: ['table'] },
+    ]);
+    const suction = properties.suction as Node;
+    expect(suction.not).toEqual({ anyOf: [{ required: ['pressure', 'gaugePressure'] }] });
+  });
+});
