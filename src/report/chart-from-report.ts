@@ -50,8 +50,11 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
  *   a report without any curve cannot be drawn.)
  * @example
  * ```ts
- * const svg = renderChart(chartSpecFromReport(report, { units: 'us' }));
- * chartSpecFromReport(report, { units: 'us' }).units; // { flow: 'gal/min', head: 'ft' }
+ * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts
+ * const spec = chartSpecFromReport(report, { units: 'us' });
+ * spec.units; // { flow: 'gal/min', head: 'ft' }
+ * spec.systemCurves.map((s) => s.name); // ['cold loop', 'hot water, 80 degC']
+ * const svg = renderChart(spec); // '<svg ...>...</svg>'
  * ```
  */
 export function chartSpecFromReport(

@@ -339,8 +339,9 @@ function curves(report: DesignReport, u: DisplayUnits): JsonCurves {
  * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'`.
  * @example
  * ```ts
- * const plain = reportToPlain(report, 'us');
- * plain.report.dutyFlow; // { value: 1200, unit: 'gal/min' } for a duty of 1200 gal/min
+ * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts (duty 105 m3/h)
+ * reportToPlain(report, 'si').report.dutyFlow; // { value: 105, unit: 'm3/h' }
+ * reportToPlain(report, 'us').report.dutyFlow; // { value: 462.301, unit: 'gal/min' }
  * ```
  */
 export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnvelope {
@@ -393,9 +394,10 @@ export interface JsonOptions {
  * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'`.
  * @example
  * ```ts
- * const doc = JSON.parse(renderJson(report, { units: 'si' }));
+ * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts (duty 105 m3/h)
+ * const doc = JSON.parse(renderJson(report, { units: 'si' })) as JsonEnvelope;
  * doc.format; // 'headflow-report/1'
- * doc.report.dutyFlow; // { value: 272.5, unit: 'm3/h' } for a duty of 272.5 m3/h
+ * doc.report.dutyFlow; // { value: 105, unit: 'm3/h' }
  * ```
  */
 export function renderJson(report: DesignReport, options: JsonOptions = {}): string {

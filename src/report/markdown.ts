@@ -80,8 +80,9 @@ function blockLines(block: Block): string[] {
  * @throws HeadflowError `INVALID_ARGUMENT` for units other than `'si'` and `'us'`.
  * @example
  * ```ts
+ * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts
  * const md = renderMarkdown(report, { units: 'si' });
- * md.startsWith('# Pump selection report: '); // true
+ * md.split('\n')[0]; // '# Pump selection report: process cooling loop'
  * ```
  */
 export function renderMarkdown(report: DesignReport, options: MarkdownOptions = {}): string {

@@ -200,8 +200,9 @@ function blockLines(block: Block, width: number): string[] {
  *   other than `'si'` and `'us'`.
  * @example
  * ```ts
+ * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts
  * const text = renderText(report, { units: 'us', width: 80 });
- * text.split('\n')[0]; // 'Pump selection report: <report.name>'
+ * text.split('\n')[0]; // 'Pump selection report: process cooling loop'
  * ```
  */
 export function renderText(report: DesignReport, options: TextOptions = {}): string {

@@ -744,4 +744,30 @@ describe('the guide (docs/reports.md)', () => {
       'true',
     ]);
   });
+  it("the doc comments' examples hold for the cooling-loop report", async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    const { report } = await import('../../docs/examples/cooling-loop');
+    log.mockRestore();
+    // 105 m3/h = 105 / 3600 m3/s = 462.301 gal/min (US gallon 3.785411784e-3 m3).
+    expectRelative((105 * M3H) / GPM, 462.301, 5e-6);
+    expect(reportToPlain(report, 'si').report.dutyFlow).toEqual({ value: 105, unit: 'm3/h' });
+    expect(reportToPlain(report, 'us').report.dutyFlow).toEqual({
+      value: 462.301,
+      unit: 'gal/min',
+    });
+    const spec = chartSpecFromReport(report, { units: 'us' });
+    expect(spec.units).toEqual({ flow: 'gal/min', head: 'ft' });
+    expect(spec.systemCurves.map((s) => s.name)).toEqual(['cold loop', 'hot water, 80 degC']);
+    expect(renderText(report, { units: 'us', width: 80 }).split('\n')[0]).toBe(
+      'Pump selection report: process cooling loop',
+    );
+    expect(renderMarkdown(report).split('\n')[0]).toBe(
+      '# Pump selection report: process cooling loop',
+    );
+    for (const out of allOutputs(report)) expect(out).not.toMatch(/NaN|undefined|Infinity/);
+    for (const line of renderText(report, { width: 40 }).split('\n')) {
+      expect(line.length).toBeLessThanOrEqual(40);
+    }
+    for (const t of markdownTables(renderMarkdown(report))) expect(new Set(t).size).toBe(1);
+  });
 });
