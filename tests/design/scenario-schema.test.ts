@@ -8,7 +8,8 @@ import {
 
 const committed = readFileSync(new URL(`../../${SCENARIO_SCHEMA_PATH}`, import.meta.url), 'utf8');
 
-type Node = Record<string, unknown>;
+// biome-ignore lint/suspicious/noExplicitAny: the test walks generated JSON freely
+type Node = any;
 
 describe('docs/scenario.schema.json', () => {
   it('is what scripts/scenario-schema.ts generates (run it after changing the format)', () => {
@@ -16,7 +17,7 @@ describe('docs/scenario.schema.json', () => {
   });
 
   it('forbids unknown fields and requires the format, name, fluid, ends, line and duty', () => {
-    const schema = scenarioJsonSchema();
+    const schema: Node = scenarioJsonSchema();
     expect(schema.additionalProperties).toBe(false);
     expect(schema.required).toEqual(
       expect.arrayContaining(['format', 'name', 'fluid', 'suction', 'discharge', 'line', 'duty']),
@@ -24,14 +25,13 @@ describe('docs/scenario.schema.json', () => {
   });
 
   it('describes quantities as text with a pattern, a description and an example', () => {
-    const properties = scenarioJsonSchema().properties as Record<string, Node>;
-    const duty = properties.duty as Node;
-    const flow = (duty.properties as Record<string, Node>).flow as Node;
+    const schema: Node = scenarioJsonSchema();
+    const flow: Node = schema.properties.duty.properties.flow;
     expect(flow.type).toBe('string');
     expect(typeof flow.pattern).toBe('string');
     expect(flow.description).toContain('a flow > 0');
     expect(flow.examples).toEqual(['1200 gal/min']);
-    const pattern = new RegExp(flow.pattern as string);
+    const pattern = new RegExp(flow.pattern);
     for (const ok of ['40 L/s', '1,200 gal/min', '2.5e-3 m3/s', '-1.2 m']) {
       expect(pattern.test(ok), ok).toBe(true);
     }
@@ -39,14 +39,14 @@ describe('docs/scenario.schema.json', () => {
   });
 
   it('writes the one-of rules of the reader', () => {
-    const properties = scenarioJsonSchema().properties as Record<string, Node>;
-    const fluid = properties.fluid as Node;
+    const schema: Node = scenarioJsonSchema();
+    const fluid: Node = schema.properties.fluid;
     expect(fluid.oneOf).toEqual([
       { required: ['water'] },
       { required: ['constant'] },
       { required: ['table'] },
     ]);
-    const suction = properties.suction as Node;
+    const suction: Node = schema.properties.suction;
     expect(suction.not).toEqual({ anyOf: [{ required: ['pressure', 'gaugePressure'] }] });
   });
 });

@@ -1,0 +1,43 @@
+/**
+ * What the command needs from the library: read a scenario file, evaluate the design, write
+ * the report and the chart. `runCli` takes it as a parameter so that tests can stand in for
+ * any part of it.
+ *
+ * @module
+ */
+import { evaluateDesign } from '../design/index';
+import { readScenario } from '../design/scenario-file';
+import type { DesignInput, DesignReport, UnitSystem } from '../design/types';
+import { chartSpecFromReport } from '../report/chart-from-report';
+import { renderChart } from '../report/index';
+import { renderJson } from '../report/json';
+import { renderMarkdown } from '../report/markdown';
+import { renderText } from '../report/text';
+
+/** Report formats the command writes. */
+export type ReportFormat = 'text' | 'markdown' | 'json';
+
+/** The library functions the command calls. */
+export interface Engine {
+  readScenario(json: string, source: string): DesignInput;
+  evaluate(design: DesignInput): DesignReport;
+  render(report: DesignReport, format: ReportFormat, units: UnitSystem | undefined): string;
+  chart(report: DesignReport, units: UnitSystem | undefined): string;
+}
+
+function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
+  return units === undefined ? {} : { units };
+}
+
+/** The library itself. */
+export const libraryEngine: Engine = {
+  readScenario: (json, source) => readScenario(json, { source }),
+  evaluate: (design) => evaluateDesign(design),
+  render(report, format, units) {
+    const options = unitsOption(units);
+    if (format === 'markdown') return renderMarkdown(report, options);
+    if (format === 'json') return renderJson(report, options);
+    return renderText(report, options);
+  },
+  chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),
+};

@@ -1,0 +1,254 @@
+/**
+ * The `headflow` command: reads a scenario file, evaluates the design and prints the report
+ * (text, Markdown or JSON), optionally writing the SVG chart. {@link runCli} does the work
+ * and returns the exit code, so that tests call it directly; `main.ts` connects it to the
+ * process.
+ *
+ * @module
+ */
+import { parseArgs } from 'node:util';
+import type { UnitSystem } from '../design/types';
+import { HeadflowError } from '../errors';
+import { type Engine, libraryEngine, type ReportFormat } from './engine';
+
+/** Exit codes of the command. */
+export const EXIT = {
+  /** The report was written and the design passed (the report's `passed`). */
+  passed: 0,
+  /** The report was written and the design did not pass: a check failed with an error. */
+  checkFailed: 1,
+  /** The input could not be used: bad arguments, a file that cannot be read or is not a design. */
+  invalidInput: 2,
+  /** Something went wrong inside headflow (a fault to report, not a fault of the input). */
+  internalError: 3,
+} as const;
+
+/** What the command reads and writes; the process's streams and files in `main.ts`. */
+export interface CliIo {
+  /** Writes to standard output. */
+  stdout(text: string): void;
+  /** Writes to standard error. */
+  stderr(text: string): void;
+  /** Reads a file as UTF-8 text. */
+  readFile(path: string): Promise<string>;
+  /** Writes UTF-8 text to a file, replacing it. */
+  writeFile(path: string, text: string): Promise<void>;
+}
+
+/** Options of {@link runCli} besides the arguments and the io. */
+export interface CliOptions {
+  /** Version printed by `--version`. */
+  readonly version?: string;
+  /** The library functions to call (tests replace parts of it). */
+  readonly engine?: Engine;
+}
+
+const FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json'];
+const UNIT_SYSTEMS: readonly UnitSystem[] = ['si', 'us'];
+
+/** The text of `headflow --help`. */
+export const HELP = `Usage: headflow <scenario.json> [options]
+
+Reads a scenario file (a design described in JSON, format headflow-scenario/1), evaluates
+every operating case and candidate pump, and prints the report.
+
+Options:
+  -f, --format <text|markdown|json>  report format (default: text)
+  -u, --units <si|us>                units of the report (default: the file's "units", else si)
+  -o, --output <file>                write the report to a file instead of standard output
+      --chart <file.svg>             also write the SVG chart of the curves
+  -h, --help                         print this help
+  -v, --version                      print the version
+
+Exit codes:
+  0  the report was written and the design passed: no system check failed and at
+     least one candidate passed all its checks
+  1  the report was written and the design did not pass (see its checks)
+  2  the input could not be used (arguments, or a file that is missing or not a design)
+  3  an internal error (please report it)
+
+The format of scenario files: docs/scenario-format.md; a JSON Schema for editors:
+docs/scenario.schema.json.
+
+Example:
+  headflow canal-lift.json --format markdown --units us --chart canal-lift.svg -o canal-lift.md
+
+The report supports, and does not replace, licensed engineering judgement and local codes.
+`;
+
+/** A fault of the input (arguments or files): exit 2 with its message. */
+class InputError extends Error {}
+
+interface Parsed {
+  readonly help: boolean;
+  readonly version: boolean;
+  readonly file: string | undefined;
+  readonly format: ReportFormat;
+  readonly units: UnitSystem | undefined;
+  readonly output: string | undefined;
+  readonly chart: string | undefined;
+}
+
+function pick<T extends string>(
+  value: string | undefined,
+  allowed: readonly T[],
+  option: string,
+): T | undefined {
+  if (value === undefined) return undefined;
+  if ((allowed as readonly string[]).includes(value)) return value as T;
+  throw new InputError(
+    `--${option} must be one of ${allowed.join(', ')}; it was ${JSON.stringify(value)}.`,
+  );
+}
+
+function parse(argv: readonly string[]): Parsed {
+  let values: Record<string, string | boolean | undefined>;
+  let positionals: string[];
+  try {
+    ({ values, positionals } = parseArgs({
+      args: [...argv],
+      options: {
+        format: { type: 'string', short: 'f' },
+        units: { type: 'string', short: 'u' },
+        output: { type: 'string', short: 'o' },
+        chart: { type: 'string' },
+        help: { type: 'boolean', short: 'h' },
+        version: { type: 'boolean', short: 'v' },
+      },
+      allowPositionals: true,
+      strict: true,
+    }));
+  } catch (e) {
+    // node:util parseArgs throws a TypeError with an ERR_PARSE_ARGS_* code for bad arguments.
+    throw new InputError(e instanceof Error ? e.message : String(e));
+  }
+  const text = (key: string): string | undefined => {
+    const value = values[key];
+    return typeof value === 'string' ? value : undefined;
+  };
+  const help = values['help'] === true;
+  const version = values['version'] === true;
+  if (!help && !version) {
+    if (positionals.length === 0) throw new InputError('no scenario file was given.');
+    if (positionals.length > 1) {
+      throw new InputError(
+        `one scenario file at a time; ${positionals.length} were given (${positionals.join(', ')}).`,
+      );
+    }
+  }
+  const output = text('output');
+  const chart = text('chart');
+  if (output !== undefined && output === chart) {
+    throw new InputError('--output and --chart name the same file.');
+  }
+  return {
+    help,
+    version,
+    file: positionals[0],
+    format: pick(text('format'), FORMATS, 'format') ?? 'text',
+    units: pick(text('units'), UNIT_SYSTEMS, 'units'),
+    output,
+    chart,
+  };
+}
+
+/** Why a file could not be read or written, from Node's error code. */
+function fileProblem(e: unknown, verb: string, path: string): InputError {
+  const code = (e as { code?: unknown } | null)?.code;
+  const why =
+    code === 'ENOENT'
+      ? 'there is no such file or folder'
+      : code === 'EISDIR'
+        ? 'it is a folder'
+        : code === 'EACCES' || code === 'EPERM'
+          ? 'permission denied'
+          : e instanceof Error
+            ? e.message
+            : String(e);
+  return new InputError(`cannot ${verb} ${path}: ${why}.`);
+}
+
+async function readText(io: CliIo, path: string): Promise<string> {
+  try {
+    return await io.readFile(path);
+  } catch (e) {
+    throw fileProblem(e, 'read', path);
+  }
+}
+
+async function writeText(io: CliIo, path: string, text: string): Promise<void> {
+  try {
+    await io.writeFile(path, text);
+  } catch (e) {
+    throw fileProblem(e, 'write', path);
+  }
+}
+
+/** Counts the error checks of a report (system and candidates). */
+function errorCount(report: ReturnType<Engine['evaluate']>): number {
+  const all = [...report.checks, ...report.candidates.flatMap((c) => c.checks)];
+  return all.filter((c) => c.severity === 'error').length;
+}
+
+/**
+ * Runs the command with its arguments (without `node` and the script) and returns the exit
+ * code: 0 when every check passed, 1 when a check failed (the report is still written), 2 for
+ * input that cannot be used (arguments, unreadable or invalid scenario file, a design the
+ * library refuses), 3 for an internal error. User errors print one message on standard error,
+ * without a stack trace.
+ *
+ * @example
+ * ```ts
+ * const code = await runCli(['lift.json', '--format', 'markdown'], {
+ *   stdout: (t) => process.stdout.write(t),
+ *   stderr: (t) => process.stderr.write(t),
+ *   readFile: (p) => readFile(p, 'utf8'),
+ *   writeFile: (p, t) => writeFile(p, t, 'utf8'),
+ * });
+ * ```
+ */
+export async function runCli(
+  argv: readonly string[],
+  io: CliIo,
+  options: CliOptions = {},
+): Promise<number> {
+  const engine = options.engine ?? libraryEngine;
+  try {
+    const args = parse(argv);
+    if (args.help) {
+      io.stdout(HELP);
+      return EXIT.passed;
+    }
+    if (args.version) {
+      io.stdout(`headflow ${options.version ?? 'unknown'}\n`);
+      return EXIT.passed;
+    }
+    const file = args.file as string;
+    const design = engine.readScenario(await readText(io, file), file);
+    const report = engine.evaluate(design);
+    const rendered = engine.render(report, args.format, args.units);
+    if (args.output === undefined) io.stdout(rendered);
+    else await writeText(io, args.output, rendered);
+    if (args.chart !== undefined) await writeText(io, args.chart, engine.chart(report, args.units));
+    if (report.passed) return EXIT.passed;
+    const n = errorCount(report);
+    io.stderr(
+      `headflow: the design did not pass: ${n === 1 ? 'a check failed' : `${n} checks failed`} (see the report).\n`,
+    );
+    return EXIT.checkFailed;
+  } catch (e) {
+    if (e instanceof InputError) {
+      io.stderr(`headflow: ${e.message}\nRun 'headflow --help' for usage.\n`);
+      return EXIT.invalidInput;
+    }
+    if (e instanceof HeadflowError) {
+      io.stderr(`headflow: ${e.message}\n`);
+      return EXIT.invalidInput;
+    }
+    const detail = e instanceof Error ? (e.stack ?? e.message) : String(e);
+    io.stderr(
+      `headflow: internal error; this is a fault in headflow, not in your input. Please report it with the scenario file.\n${detail}\n`,
+    );
+    return EXIT.internalError;
+  }
+}
