@@ -12,4 +12,5 @@ export const publicModules = [
   'system',
   'pumps',
   'design',
+  'report',
 ] as const;

@@ -13,5 +13,6 @@ export * from './friction/index';
 export * from './losses/index';
 export * from './pipes/index';
 export * from './pumps/index';
+export * from './report/index';
 export * from './system/index';
 export * from './units/index';

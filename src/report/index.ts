@@ -1,11 +1,13 @@
 /**
- * Reports of a pump selection. For now: the SVG chart of pump, system, efficiency and NPSH
- * curves with operating points and preferred operating regions.
+ * Reports of a pump selection: a design report rendered as terminal text, Markdown or JSON,
+ * and the SVG chart of pump, system, efficiency and NPSH curves with operating points and
+ * preferred operating regions.
  *
  * @module report
  */
 
 export { renderChart } from './chart';
+export { type ChartFromReportOptions, chartSpecFromReport } from './chart-from-report';
 export type {
   ChartBand,
   ChartMarker,
@@ -14,3 +16,25 @@ export type {
   ChartSeries,
   ChartSpec,
 } from './chart-spec';
+export {
+  type JsonCandidate,
+  type JsonCaseDuty,
+  type JsonCaseResult,
+  type JsonCheck,
+  type JsonCurve,
+  type JsonCurves,
+  type JsonEnvelope,
+  type JsonMotor,
+  type JsonOptions,
+  type JsonQuantity,
+  type JsonReport,
+  type JsonRun,
+  type JsonSamples,
+  type JsonUnits,
+  REPORT_FORMAT,
+  renderJson,
+  reportToPlain,
+} from './json';
+export { type MarkdownOptions, renderMarkdown } from './markdown';
+export { renderText, type TextOptions } from './text';
+export { displayUnits } from './units';

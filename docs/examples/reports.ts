@@ -1,13 +1,14 @@
-// The sample of docs/reports.md. Until the renderers are exported from 'headflow/report',
-// this file imports them from the source files; below the imports it equals the docs' sample.
-
-import { design } from '../../docs/examples/cooling-loop';
-import { evaluateDesign } from '../../src/design/index';
-import { chartSpecFromReport } from '../../src/report/chart-from-report';
-import { renderChart } from '../../src/report/index';
-import { type JsonEnvelope, renderJson } from '../../src/report/json';
-import { renderMarkdown } from '../../src/report/markdown';
-import { renderText } from '../../src/report/text';
+// example: docs/examples/reports.ts
+import { evaluateDesign } from 'headflow/design';
+import {
+  chartSpecFromReport,
+  type JsonEnvelope,
+  renderChart,
+  renderJson,
+  renderMarkdown,
+  renderText,
+} from 'headflow/report';
+import { design } from './cooling-loop'; // the DesignInput of docs/examples/cooling-loop.ts
 
 const report = evaluateDesign(design);
 
