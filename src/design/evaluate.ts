@@ -17,8 +17,17 @@ import {
   speedForFlow,
 } from '../pumps/index';
 import { type ScenarioCurve, type SystemCurve, systemScenarios } from '../system/index';
-import type { Flow, Length, Power, RotationalSpeed, Velocity } from '../units/index';
+import {
+  type Flow,
+  formatQuantity,
+  type Length,
+  type Power,
+  type Pressure,
+  type RotationalSpeed,
+  type Velocity,
+} from '../units/index';
 import { CAUTIONS } from './cautions';
+import { displayUnits } from './display-units';
 import type {
   Arrangement,
   CandidateInput,
@@ -49,7 +58,28 @@ const REGION_SOURCE = 'ANSI/HI 9.6.3 (preferred operating region 70-120 % of BEP
 const COMMON = 'common practice';
 const SAMPLES = 61;
 
+/** Formats numbers for check messages in the report's units. */
+interface Say {
+  flow(v: number): string;
+  head(v: number): string;
+  pressure(v: number): string;
+  power(v: number): string;
+  velocity(v: number): string;
+}
+
+function sayIn(units: DesignInput['units']): Say {
+  const u = displayUnits(units ?? 'si');
+  return {
+    flow: (v) => formatQuantity(v as Flow, u.flow),
+    head: (v) => formatQuantity(v as Length, u.head, 3),
+    pressure: (v) => formatQuantity(v as Pressure, u.pressure),
+    power: (v) => formatQuantity(v as Power, u.power, 3),
+    velocity: (v) => formatQuantity(v as Velocity, u.velocity, 3),
+  };
+}
+
 interface Limits {
+  readonly say: Say;
   readonly npshMarginRatio: number;
   readonly npshMinimumMargin: number;
   readonly suction: { readonly min: number; readonly max: number };
@@ -123,6 +153,7 @@ function resolveLimits(input: DesignInput): Limits {
   if (l.designPressure !== undefined)
     checkPositive('limits.designPressure', l.designPressure, 'Pa');
   return {
+    say: sayIn(input.units),
     npshMarginRatio: ratio,
     npshMinimumMargin: minimum,
     suction: range('limits.suctionVelocity', l.suctionVelocity, DESIGN_DEFAULTS.suctionVelocity),
@@ -290,7 +321,7 @@ function dutyInCase(
         'warning',
         undefined,
         s.name,
-        `The liquid is near boiling at the suction: vapour pressure ${fmt(fluid.vaporPressure / 1000)} kPa is ` +
+        `The liquid is near boiling at the suction: vapour pressure ${limits.say.pressure(fluid.vaporPressure)} is ` +
           `${fmt((100 * fluid.vaporPressure) / suctionPressure, 3)} % of the suction surface pressure. ` +
           'Small changes of temperature or pressure can flash it; check NPSH with care.',
         {
@@ -331,8 +362,8 @@ function dutyInCase(
             'warning',
             undefined,
             s.name,
-            `Velocity in ${isSuction ? 'suction' : 'discharge'} run '${r.name}' is ${fmt(r.velocity, 3)} m/s, ` +
-              `outside the usual ${range.min} to ${range.max} m/s for ${isSuction ? 'suction' : 'discharge'} lines` +
+            `Velocity in ${isSuction ? 'suction' : 'discharge'} run '${r.name}' is ${limits.say.velocity(r.velocity)}, ` +
+              `outside the usual ${limits.say.velocity(range.min)} to ${limits.say.velocity(range.max)} for ${isSuction ? 'suction' : 'discharge'} lines` +
               (r.velocity > range.max
                 ? ' (erosion, noise, surge and suction losses grow).'
                 : ' (settling, air pockets, an oversized pipe).'),
@@ -439,8 +470,8 @@ function runCase(
         c.name,
         s.name,
         short
-          ? `Delivers ${fmt(flow * 3600)} m3/h, short of the duty ${fmt(input.dutyFlow * 3600)} m3/h.`
-          : `Runs at ${fmt(flow * 3600)} m3/h, above the duty ${fmt(input.dutyFlow * 3600)} m3/h: a valve would throttle it (or trim the impeller).`,
+          ? `Delivers ${limits.say.flow(flow)}, short of the duty ${limits.say.flow(input.dutyFlow)}.`
+          : `Runs at ${limits.say.flow(flow)}, above the duty ${limits.say.flow(input.dutyFlow)}: a valve would throttle it (or trim the impeller).`,
         { flow, dutyFlow: input.dutyFlow },
         COMMON,
       ),
@@ -492,7 +523,7 @@ function runCase(
           'error',
           c.name,
           s.name,
-          `Cavitation: NPSH available ${fmt(npsha, 3)} m is below NPSH required ${fmt(npshr, 3)} m. Raise the suction level or pressure, lower the pump, shorten or enlarge the suction line, or cool the liquid.`,
+          `Cavitation: NPSH available ${limits.say.head(npsha)} is below NPSH required ${limits.say.head(npshr)}. Raise the suction level or pressure, lower the pump, shorten or enlarge the suction line, or cool the liquid.`,
           { npshAvailable: npsha, npshRequired: npshr, ratio: m.ratio },
           NPSH_SOURCE,
         ),
@@ -504,7 +535,7 @@ function runCase(
           'warning',
           c.name,
           s.name,
-          `NPSH margin too small: ${fmt(npsha, 3)} m available against ${fmt(npshr, 3)} m required (ratio ${fmt(m.ratio, 3)}); the design asks for at least ${fmt(m.requiredAvailable, 3)} m.`,
+          `NPSH margin too small: ${limits.say.head(npsha)} available against ${limits.say.head(npshr)} required (ratio ${fmt(m.ratio, 3)}); the design asks for at least ${limits.say.head(m.requiredAvailable)}.`,
           {
             npshAvailable: npsha,
             npshRequired: npshr,
@@ -538,7 +569,7 @@ function runCase(
           'error',
           c.name,
           s.name,
-          `Motor overload: the pump needs ${fmt(perPumpPower / 1000)} kW, above the ${fmt(c.input.motorRating / 1000)} kW motor${sf > 1 ? ` times its service factor ${sf}` : ''}.`,
+          `Motor overload: the pump needs ${limits.say.power(perPumpPower)}, above the ${limits.say.power(c.input.motorRating)} motor${sf > 1 ? ` times its service factor ${sf}` : ''}.`,
           { shaftPower: perPumpPower, motorRating: c.input.motorRating, serviceFactor: sf },
           'NEMA MG 1 / IEC 60034-1 (rated output)',
         ),
@@ -605,7 +636,7 @@ function evaluateCandidate(
           'info',
           c.name,
           undefined,
-          `A ${dutyOnlyMotor.nameplate} ${dutyOnlyMotor.unit} motor covers the duty points, but the pump can draw ${fmt(maxShaftPower / 1000)} kW at the end of its curve (a burst pipe, an open bypass, a low static head): the ${motor.nameplate} ${motor.unit} motor never overloads.`,
+          `A ${dutyOnlyMotor.nameplate} ${dutyOnlyMotor.unit} motor covers the duty points, but the pump can draw ${limits.say.power(maxShaftPower)} at the end of its curve (a burst pipe, an open bypass, a low static head): the ${motor.nameplate} ${motor.unit} motor never overloads.`,
           { dutyOnly: dutyOnlyMotor.rating, nonOverloading: motor.rating, maxShaftPower },
           series === 'nema' ? 'NEMA MG 1 (standard ratings)' : 'IEC 60072-1 (standard ratings)',
         ),
@@ -621,7 +652,7 @@ function evaluateCandidate(
           'warning',
           c.name,
           undefined,
-          `The ${fmt(c.input.motorRating / 1000)} kW motor would overload if the pump ran out to the end of its curve (${fmt(maxShaftPower / 1000)} kW).`,
+          `The ${limits.say.power(c.input.motorRating)} motor would overload if the pump ran out to the end of its curve (${limits.say.power(maxShaftPower)}).`,
           { maxShaftPower, motorRating: c.input.motorRating },
           COMMON,
         ),
@@ -688,7 +719,7 @@ function evaluateCandidate(
       'warning',
       c.name,
       undefined,
-      `Against a closed discharge the set runs at shut-off (${fmt(setShutoff, 3)} m) and heats the liquid it churns: provide a minimum-flow bypass, a low-flow trip or interlocked valves.`,
+      `Against a closed discharge the set runs at shut-off (${limits.say.head(setShutoff)}) and heats the liquid it churns: provide a minimum-flow bypass, a low-flow trip or interlocked valves.`,
       { shutoffHead: setShutoff },
       COMMON,
     ),
@@ -707,7 +738,7 @@ function evaluateCandidate(
             'error',
             c.name,
             s.name,
-            `At shut-off the discharge pressure reaches ${fmt(maxPressure / 1000)} kPa (absolute), above the piping's design pressure ${fmt(limits.designPressure / 1000)} kPa: use a lower-head pump, a relief valve or a higher pressure rating.`,
+            `At shut-off the discharge pressure reaches ${limits.say.pressure(maxPressure)} (absolute), above the piping's design pressure ${limits.say.pressure(limits.designPressure)} (absolute): use a lower-head pump, a relief valve or a higher pressure rating.`,
             { maxPressure, designPressure: limits.designPressure },
             'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)',
           ),

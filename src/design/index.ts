@@ -6,6 +6,7 @@
  * @module design
  */
 export { CAUTIONS } from './cautions';
+export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
 export type {
   Arrangement,

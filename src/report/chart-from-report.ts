@@ -8,7 +8,7 @@ import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
 import { argumentError } from '../errors';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
-import { displayUnits } from './units';
+import { displayUnits } from '../design/index';
 
 /** Options of {@link chartSpecFromReport}. */
 export interface ChartFromReportOptions {

@@ -27,7 +27,7 @@ import {
   formatShort,
   formatWithUnit,
 } from './format-values';
-import { displayUnits } from './units';
+import { displayUnits } from '../design/index';
 
 /** A table column: its header (lines split by `\n`) and how its cells align. */
 export interface Column {

@@ -37,4 +37,4 @@ export {
 } from './json';
 export { type MarkdownOptions, renderMarkdown } from './markdown';
 export { renderText, type TextOptions } from './text';
-export { displayUnits } from './units';
+export { displayUnits } from '../design/index';

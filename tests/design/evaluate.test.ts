@@ -406,6 +406,16 @@ describe('bad input', () => {
 });
 
 describe('units of the report', () => {
+  it('writes check messages in the report units', () => {
+    const us = evaluateDesign({ ...design, units: 'us' });
+    const fixed = us.candidates.find((c) => c.name === 'fast pump, fixed');
+    const duty = fixed?.checks.find((k) => k.id === 'duty-flow');
+    // 150 m3/h = 660.43 gal/min (US gallon 3.785411784 L)
+    expect(duty?.message).toContain('above the duty 660.4 gal/min');
+    expect(fixed?.checks.find((k) => k.id === 'dead-head')?.message).toContain('(246 ft)'); // 75 m
+    const si = fast()?.checks.find((k) => k.id === 'duty-flow');
+    expect(si?.message).toContain('above the duty 150 m3/h');
+  });
   it('keeps SI numbers and records the unit system for printing', () => {
     expect(evaluateDesign(base({ units: 'us' })).units).toBe('us');
     expect(to(report.dutyFlow, 'm3/h')).toBeCloseTo(150, 12);

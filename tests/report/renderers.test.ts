@@ -19,7 +19,7 @@ import {
 } from '../../src/report/json';
 import { renderMarkdown } from '../../src/report/markdown';
 import { renderText } from '../../src/report/text';
-import { displayUnits } from '../../src/report/units';
+import { displayUnits } from '../../src/report';
 import { isUnit, q, si } from '../../src/units/index';
 import { expectHeadflowError, expectRelative } from '../helpers/expect';
 import { AGED_CASE, DESIGN_CASE, REPORT } from './fixture';

@@ -4,8 +4,9 @@
  *
  * @module
  */
-import type { DisplayUnits, UnitSystem } from '../design/index';
+
 import { argumentError } from '../errors';
+import type { DisplayUnits, UnitSystem } from './types';
 
 const SI: DisplayUnits = Object.freeze({
   flow: 'm3/h',
