@@ -138,7 +138,14 @@ export function reportError(
   followParameter = false,
 ): void {
   if (!(error instanceof HeadflowError)) throw error;
-  const below = followParameter ? parameterPath(error.parameter) : undefined;
+  let below = followParameter ? parameterPath(error.parameter) : undefined;
+  // Follow the parameter only into a field the file has (not an inner name such as `x`).
+  let node: unknown = sink.dataset.value;
+  for (const key of at) node = (node as Record<string | number, unknown> | null)?.[key];
+  const first = below?.[0];
+  if (first === undefined || node === null || typeof node !== 'object' || !(first in node)) {
+    below = undefined;
+  }
   report(sink, error.code, fileMessage(error), below === undefined ? at : [...at, ...below]);
 }
 

@@ -106,9 +106,10 @@ describe('readScenario: the example file', () => {
     expect(main?.fittings).toEqual([
       { id: 'elbow-90-standard', count: 6 },
       { id: 'gate-valve-open' },
+      { id: 'swing-check-valve' },
       { id: 'exit' },
     ]);
-    expect(main?.valves).toEqual([{ name: 'check valve', k: 2 }]);
+    expect(main?.valves).toEqual([{ name: 'flow control valve', cv: 900 }]);
   });
 
   it('turns a rated equipment point into a square-law loss', () => {
