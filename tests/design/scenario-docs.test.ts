@@ -39,7 +39,8 @@ describe('docs/scenario-format.md', () => {
     } catch (e) {
       message = e instanceof Error ? e.message : '';
     }
-    const shown = /```\n {2}(the scenario file has 2 problems:[\s\S]*?)\n\s*```/.exec(guide)?.[1] ?? '';
+    const shown =
+      /```\n {2}(the scenario file has 2 problems:[\s\S]*?)\n\s*```/.exec(guide)?.[1] ?? '';
     const dedented = shown
       .split('\n')
       .map((line) => line.replace(/^ {2}/, ''))
