@@ -7,7 +7,7 @@
  * @module
  */
 import { parseArgs } from 'node:util';
-import type { UnitSystem } from '../design/types';
+import type { UnitSystem } from '../design/index';
 import { HeadflowError } from '../errors';
 import { type Engine, libraryEngine, type ReportFormat } from './engine';
 
