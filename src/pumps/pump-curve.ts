@@ -76,6 +76,11 @@ interface Base {
 
 const GRID = 512;
 
+/** The k-th of GRID + 1 evenly spaced flows from a to b, landing exactly on b at k = GRID. */
+function gridFlow(a: number, b: number, k: number): number {
+  return k === GRID ? b : a + ((b - a) * k) / GRID;
+}
+
 /**
  * Builds a pump from catalogue points (flow, head and optionally efficiency, NPSH required
  * or shaft power) at a rated speed.
@@ -322,7 +327,7 @@ function buildBase(input: PumpCurveInput): Base {
   let prev = Number.POSITIVE_INFINITY;
   const tolH = 1e-9 * (h[0] as number);
   for (let k = 0; k <= GRID; k++) {
-    const x = k === GRID ? last : xMin + ((last - xMin) * k) / GRID;
+    const x = gridFlow(xMin, last, k);
     const v = head.evaluate(x);
     if (!(v > 0) || v > prev + tolH) {
       throw argumentError(
@@ -355,7 +360,7 @@ function buildBase(input: PumpCurveInput): Base {
     effFn = (x) =>
       x === 0 ? 0 : (powerDensity * STANDARD_GRAVITY * x * head.evaluate(x)) / pk.evaluate(x);
     for (let i = 0; i <= GRID; i++) {
-      const x = i === GRID ? last : xMin + ((last - xMin) * i) / GRID;
+      const x = gridFlow(xMin, last, i);
       const v = pk.evaluate(x);
       if (!(v > 0)) {
         throw argumentError(
@@ -371,7 +376,7 @@ function buildBase(input: PumpCurveInput): Base {
   }
   if (effFn !== undefined) {
     for (let i = 1; i <= GRID; i++) {
-      const x = i === GRID ? last : xMin + ((last - xMin) * i) / GRID;
+      const x = gridFlow(xMin, last, i);
       const v = effFn(x);
       if (!(v > 0 && v <= 1)) {
         throw argumentError(
@@ -399,7 +404,7 @@ function buildBase(input: PumpCurveInput): Base {
     }
     npsh = fitKernel('npshRequired', npQ, np, spec, false);
     for (let i = 0; i <= GRID; i++) {
-      const x = npsh.xMin + ((npsh.xMax - npsh.xMin) * i) / GRID;
+      const x = gridFlow(npsh.xMin, npsh.xMax, i);
       const v = npsh.evaluate(x);
       if (!(v > 0)) {
         throw argumentError(

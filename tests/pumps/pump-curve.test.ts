@@ -311,3 +311,19 @@ describe('pumpCurve: evaluation and no silent extrapolation', () => {
     );
   });
 });
+
+describe('NPSH data that start above zero flow', () => {
+  it('builds when the last grid flow would round past the last NPSH point', () => {
+    // flows 100, 175 and 230 gal/min: (xMax - xMin) * 512 / 512 + xMin rounds above xMax
+    const pump = pumpCurve({
+      speed: q(3500, 'rpm'),
+      points: [
+        { flow: q(0, 'gal/min'), head: q(120, 'ft'), efficiency: 0 },
+        { flow: q(100, 'gal/min'), head: q(115, 'ft'), efficiency: 0.55, npshRequired: q(6, 'ft') },
+        { flow: q(175, 'gal/min'), head: q(104, 'ft'), efficiency: 0.68, npshRequired: q(8, 'ft') },
+        { flow: q(230, 'gal/min'), head: q(90, 'ft'), efficiency: 0.66, npshRequired: q(11, 'ft') },
+      ],
+    });
+    expect(to(pump.npshRequired(q(230, 'gal/min')), 'ft')).toBeCloseTo(11, 12);
+  });
+});
