@@ -61,9 +61,9 @@ Options:
   -v, --version                      print the version
 
 Exit codes:
-  0  the report was written and the design passed: no system check failed and at
-     least one candidate passed all its checks
-  1  the report was written and the design did not pass (see its checks)
+  0  the report was written and every check passed (no check is an error)
+  1  the report was written and at least one check failed: a system check, or a
+     candidate's (the ranking still lists the passing candidates first)
   2  the input could not be used (arguments, or a file that is missing or not a design)
   3  an internal error (please report it)
 

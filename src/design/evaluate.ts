@@ -976,9 +976,10 @@ export function evaluateDesign(input: DesignInput): DesignReport {
     });
   const ranked: CandidateReport[] = order.map(({ r }, k) => ({ ...r, rank: k + 1 }));
   const curves = curvesOf(input, candidates, evaluated, family);
+  // Passed: no check anywhere is an error (a failing candidate fails the report; the
+  // ranking still puts the passing candidates first).
   const passed =
-    !systemChecks.some((k) => k.severity === 'error') &&
-    (ranked.length === 0 || ranked.some((r) => r.passed));
+    !systemChecks.some((k) => k.severity === 'error') && ranked.every((r) => r.passed);
   return {
     name: input.name,
     units: input.units ?? 'si',

@@ -8,6 +8,14 @@
 export { CAUTIONS } from './cautions';
 export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
+export {
+  type ReadScenarioOptions,
+  readScenario,
+  SCENARIO_FORMAT,
+  ScenarioFileError,
+  type ScenarioIssue,
+  scenarioSchema,
+} from './scenario-file';
 export type {
   Arrangement,
   CandidateInput,

@@ -26,13 +26,14 @@ export type Dimension =
   | 'time'
   | 'rotationalSpeed';
 
-declare const dimensionBrand: unique symbol;
 
 /**
- * A number in coherent SI whose dimension `D` is known to the type checker.
+ * A number in coherent SI whose dimension `D` is known to the type checker. The brand
+ * `'~dimension'` exists only in the types (no object carries it at run time); a plain string
+ * key keeps it nameable in declaration files.
  * Make one with `q(value, unit)`; read it with `to(quantity, unit)`.
  */
-export type Quantity<D extends Dimension> = number & { readonly [dimensionBrand]: D };
+export type Quantity<D extends Dimension> = number & { readonly '~dimension': D };
 
 /** Length in metres (also head, as the height of a fluid column). */
 export type Length = Quantity<'length'>;

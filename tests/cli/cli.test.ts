@@ -51,6 +51,13 @@ function memoryIo(files: Record<string, string> = {}): Captured {
   };
 }
 
+/** The example with only pump B (drive), which passes every check. */
+function passingFile(): string {
+  const f = JSON.parse(EXAMPLE);
+  f.candidates = [f.candidates[1]];
+  return JSON.stringify(f);
+}
+
 /** The example with only pump A, which falls short of the duty in the low-level aged case. */
 function failingFile(): string {
   const f = JSON.parse(EXAMPLE);
@@ -95,7 +102,7 @@ describe('headflow --help and --version', () => {
 
 describe('headflow <file>: a design that passes', () => {
   it('prints the text report and exits 0', async () => {
-    const c = memoryIo({ 'lift.json': EXAMPLE });
+    const c = memoryIo({ 'lift.json': passingFile() });
     expect(await runCli(['lift.json'], c.io)).toBe(EXIT.passed);
     expect(c.out()).toMatch(/^Pump selection report: Canal lift to hillside tank\n/);
     expect(c.out()).toContain('Cautions');
@@ -103,10 +110,10 @@ describe('headflow <file>: a design that passes', () => {
   });
 
   it('writes Markdown, JSON and the units asked for', async () => {
-    const md = memoryIo({ 'lift.json': EXAMPLE });
+    const md = memoryIo({ 'lift.json': passingFile() });
     expect(await runCli(['lift.json', '--format', 'markdown'], md.io)).toBe(0);
     expect(md.out()).toMatch(/^# Pump selection report: Canal lift to hillside tank/);
-    const json = memoryIo({ 'lift.json': EXAMPLE });
+    const json = memoryIo({ 'lift.json': passingFile() });
     expect(await runCli(['lift.json', '-f', 'json', '-u', 'us'], json.io)).toBe(0);
     const envelope = JSON.parse(json.out());
     expect(envelope.format).toBe('headflow-report/1');
@@ -115,7 +122,7 @@ describe('headflow <file>: a design that passes', () => {
   });
 
   it('writes the report and the chart to files', async () => {
-    const c = memoryIo({ 'lift.json': EXAMPLE });
+    const c = memoryIo({ 'lift.json': passingFile() });
     const code = await runCli(
       ['lift.json', '--output', 'lift.md', '--format=markdown', '--chart', 'lift.svg'],
       c.io,
@@ -130,6 +137,12 @@ describe('headflow <file>: a design that passes', () => {
 });
 
 describe('headflow <file>: a design that fails a check', () => {
+  it('the whole example fails: pump A falls short in one case, though pump B passes', async () => {
+    const c = memoryIo({ 'lift.json': EXAMPLE });
+    expect(await runCli(['lift.json'], c.io)).toBe(EXIT.checkFailed);
+    expect(c.out()).toMatch(/^Pump selection report: Canal lift to hillside tank\n/);
+  });
+
   it('prints the report, says so on standard error and exits 1', async () => {
     const c = memoryIo({ 'lift.json': failingFile() });
     expect(await runCli(['lift.json'], c.io)).toBe(EXIT.checkFailed);

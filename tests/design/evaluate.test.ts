@@ -232,7 +232,7 @@ describe('checks', () => {
     expect(
       failed?.checks.some((k) => k.id === 'no-operating-point' && k.severity === 'error'),
     ).toBe(true);
-    expect(r.passed).toBe(true);
+    expect(r.passed).toBe(false); // one candidate failed a check
   });
   it('cavitation when the pump sits high above the tank', () => {
     const r = evaluateDesign(
