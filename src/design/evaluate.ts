@@ -978,8 +978,7 @@ export function evaluateDesign(input: DesignInput): DesignReport {
   const curves = curvesOf(input, candidates, evaluated, family);
   // Passed: no check anywhere is an error (a failing candidate fails the report; the
   // ranking still puts the passing candidates first).
-  const passed =
-    !systemChecks.some((k) => k.severity === 'error') && ranked.every((r) => r.passed);
+  const passed = !systemChecks.some((k) => k.severity === 'error') && ranked.every((r) => r.passed);
   return {
     name: input.name,
     units: input.units ?? 'si',

@@ -5,10 +5,10 @@
  * @module
  */
 import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
+import { displayUnits } from '../design/index';
 import { argumentError } from '../errors';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
-import { displayUnits } from '../design/index';
 
 /** Options of {@link chartSpecFromReport}. */
 export interface ChartFromReportOptions {

@@ -15,6 +15,7 @@ import type {
   Severity,
   UnitSystem,
 } from '../design/index';
+import { displayUnits } from '../design/index';
 import type { MotorRating } from '../pumps/index';
 import type { Power } from '../units/index';
 import {
@@ -27,7 +28,6 @@ import {
   formatShort,
   formatWithUnit,
 } from './format-values';
-import { displayUnits } from '../design/index';
 
 /** A table column: its header (lines split by `\n`) and how its cells align. */
 export interface Column {

@@ -6,6 +6,7 @@
  * @module report
  */
 
+export { displayUnits } from '../design/index';
 export { renderChart } from './chart';
 export { type ChartFromReportOptions, chartSpecFromReport } from './chart-from-report';
 export type {
@@ -37,4 +38,3 @@ export {
 } from './json';
 export { type MarkdownOptions, renderMarkdown } from './markdown';
 export { renderText, type TextOptions } from './text';
-export { displayUnits } from '../design/index';

@@ -14,11 +14,11 @@ import type {
   SampledCurve,
   UnitSystem,
 } from '../design/index';
+import { displayUnits } from '../design/index';
 import type { MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
 import { convert, type Dimension, type Quantity, si, to, type UnitOf } from '../units/index';
 import { chosenUnits } from './format-values';
-import { displayUnits } from '../design/index';
 
 /** The `format` tag of the envelope; the number changes when the shape changes incompatibly. */
 export const REPORT_FORMAT = 'headflow-report/1';

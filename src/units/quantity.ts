@@ -26,7 +26,6 @@ export type Dimension =
   | 'time'
   | 'rotationalSpeed';
 
-
 /**
  * A number in coherent SI whose dimension `D` is known to the type checker. The brand
  * `'~dimension'` exists only in the types (no object carries it at run time); a plain string

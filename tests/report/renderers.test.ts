@@ -1,8 +1,8 @@
-import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { XMLValidator } from 'fast-xml-parser';
 import { describe, expect, it, vi } from 'vitest';
 import type { CandidateReport, DesignReport } from '../../src/design/index';
+import { displayUnits } from '../../src/report';
 import { chartSpecFromReport } from '../../src/report/chart-from-report';
 import {
   formatGrouped,
@@ -19,7 +19,6 @@ import {
 } from '../../src/report/json';
 import { renderMarkdown } from '../../src/report/markdown';
 import { renderText } from '../../src/report/text';
-import { displayUnits } from '../../src/report';
 import { isUnit, q, si } from '../../src/units/index';
 import { expectHeadflowError, expectRelative } from '../helpers/expect';
 import { AGED_CASE, DESIGN_CASE, REPORT } from './fixture';
