@@ -13,6 +13,7 @@ export default defineConfig({
   },
   test: {
     include: ['tests/**/*.test.ts'],
+    setupFiles: ['tests/setup/fast-check.ts'],
     typecheck: {
       enabled: true,
       include: ['tests/**/*.test-d.ts'],

@@ -1,28 +1,30 @@
 /**
- * `npm run demo`: a short tour of what headflow does today. It grows with the library.
- * The booster duty below is invented for the demo.
+ * `npm run demo`: evaluates the invented canal-lift scenario (docs/examples/canal-lift.json),
+ * prints its report and writes its chart to .demo/canal-lift.svg.
  */
-import { formatQuantity, type Power, pressureFromHead, q, STANDARD_GRAVITY } from 'headflow';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, relative } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import {
+  chartSpecFromReport,
+  evaluateDesign,
+  readScenario,
+  renderChart,
+  renderText,
+} from 'headflow';
 
-console.log('headflow demo: units for a pump duty (an invented orchard booster)\n');
+const here = dirname(fileURLToPath(import.meta.url));
+const root = join(here, '..', '..');
+const file = join(here, 'canal-lift.json');
 
-const flow = q(1200, 'gal/min');
-const head = q(350, 'ft');
-const density = q(998.2, 'kg/m3'); // water near 20 degC, for the demo only
-console.log(
-  `duty flow        ${formatQuantity(flow, 'gal/min')} = ${formatQuantity(flow, 'm3/h')} = ${formatQuantity(flow, 'L/s')}`,
-);
-console.log(`duty head        ${formatQuantity(head, 'ft')} = ${formatQuantity(head, 'm')}`);
+const design = readScenario(readFileSync(file, 'utf8'), { source: relative(root, file) });
+const report = evaluateDesign(design);
+console.log(renderText(report));
 
-const rise = pressureFromHead(head, density);
-console.log(`pressure rise    ${formatQuantity(rise, 'psi')} = ${formatQuantity(rise, 'bar')}`);
-
-// Hydraulic power rho g Q H (the pumps module will carry this; here by hand).
-const hydraulic = (density * STANDARD_GRAVITY * flow * head) as Power;
-console.log(
-  `hydraulic power  ${formatQuantity(hydraulic, 'kW')} = ${formatQuantity(hydraulic, 'hp')}`,
-);
-
-console.log(
-  '\nResults support, and do not replace, licensed engineering judgement and local codes.',
-);
+const out = join(root, '.demo');
+mkdirSync(out, { recursive: true });
+const chart = join(out, 'canal-lift.svg');
+writeFileSync(chart, renderChart(chartSpecFromReport(report)));
+console.log(`Chart written to ${relative(root, chart)} (open it in a browser).`);
+console.log('The same from the command line, after npm run build:');
+console.log('  node dist/cli/main.js docs/examples/canal-lift.json --chart .demo/canal-lift.svg');

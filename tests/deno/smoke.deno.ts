@@ -51,5 +51,9 @@ const report = evaluateDesign({
 });
 close('duty head (no losses in a zero-length run)', report.duty[0].head, 15, 1e-12);
 
+// the README's Deno sample
+const readme = water().at(q(60, 'degC'));
+close('README sample: water at 60 degC', to(readme.density, 'kg/m3'), 983.2, 5e-5);
+
 console.log(`deno: ${passed} passed, ${failed} failed`);
 if (failed > 0) Deno.exit(1);

@@ -47,13 +47,17 @@ describe('examples run and print what their comments say', () => {
     // 144 in2/ft2 / 62.4 lb/ft3 = 2.3077 ft of water per psi (common practice: "2.31 ft/psi").
     expect(mod.feetPerPsi).toBeCloseTo(2.3077, 4);
   });
-  it('demo', async () => {
+  it('demo: evaluates the canal-lift scenario, prints the report and writes the chart', async () => {
     const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
     await import('../../docs/examples/demo');
     const text = log.mock.calls.map((c) => String(c[0])).join('\n');
     log.mockRestore();
-    expect(text).toContain('272.5 m3/h');
-    expect(text).toContain('licensed engineering judgement');
+    expect(text).toMatch(/^Pump selection report: Canal lift to hillside tank/);
+    expect(text).toContain('licensed engineer');
+    expect(text).toContain('Chart written to .demo/canal-lift.svg');
+    const svg = read('.demo/canal-lift.svg');
+    expect(svg.startsWith('<?xml') || svg.startsWith('<svg')).toBe(true);
+    expect(svg.trimEnd().endsWith('</svg>')).toBe(true);
   });
 });
 
@@ -77,5 +81,48 @@ describe('system example', () => {
     ]);
     expect(read('docs/system.md')).toContain(lines.join('\n'));
     expect(mod.heads[1]).toBeGreaterThan(mod.heads[0] ?? Number.POSITIVE_INFINITY);
+  });
+});
+
+describe('README samples', () => {
+  it('the Node sample runs and prints what its comments say', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    await import('../../docs/examples/readme-node');
+    const lines = log.mock.calls.map((c) => String(c[0]));
+    log.mockRestore();
+    expect(lines).toEqual([
+      'duty head 30.43 m at 36 m3/h',
+      'runs at 41.51 m3/h',
+      'motor 7.5 kW, passed: true',
+    ]);
+  });
+  it('the Deno sample is the file Deno runs (tests/deno/readme.deno.ts), after its import', () => {
+    const block =
+      /```ts\n(import \{[^}]*\} from 'npm:headflow';\n[\s\S]*?)```/.exec(read('README.md'))?.[1] ??
+      '';
+    const body = (code: string): string => code.slice(code.indexOf('\nconst '));
+    expect(block).not.toBe('');
+    expect(body(block)).toBe(body(read('tests/deno/readme.deno.ts')));
+  });
+});
+
+/** The `// comment` after each console.log call of an example, in order. */
+function printedComments(path: string): string[] {
+  const out: string[] = [];
+  const text = read(path);
+  const call = /console\.log\([\s\S]*?\);[ \t]*\/\/ (.+)$/gm;
+  for (let m = call.exec(text); m !== null; m = call.exec(text)) out.push(m[1] ?? '');
+  return out;
+}
+
+describe('getting started', () => {
+  it('prints what the comments beside its console.log calls say', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    await import('../../docs/examples/getting-started');
+    const lines = log.mock.calls.map((c) => String(c[0]));
+    log.mockRestore();
+    const expected = printedComments('docs/examples/getting-started.ts');
+    expect(expected).toHaveLength(6);
+    expect(lines).toEqual(expected);
   });
 });

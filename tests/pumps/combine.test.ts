@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { operatingPoint, pumpCurve, pumpsInParallel, pumpsInSeries } from '../../src/pumps/index';
 import { type Flow, type Length, q, to } from '../../src/units';
-import { expectHeadflowError, expectRelative } from '../helpers/expect';
+import { expectAbsolute, expectHeadflowError, expectRelative } from '../helpers/expect';
 import { EXACT_FITS, PUMP_A, quadraticPoints, quadraticPump, quadraticSystem } from './fixtures';
 
 const pump = quadraticPump();
@@ -32,8 +32,12 @@ describe('pumpsInParallel', () => {
         const q1 = (u * pump.flowRange.max) as Flow;
         expectRelative(two.head((2 * q1) as Flow), pump.head(q1), 1e-12);
         const s = two.shares((2 * q1) as Flow);
-        expectRelative(s[0]?.flow ?? 0, q1, 1e-10);
-        expectRelative(s[1]?.flow ?? 0, q1, 1e-10);
+        // Each share is a flow found from a head; near shut-off dH/dQ tends to zero and that
+        // inversion is ill-conditioned, so the flows are compared to 1e-10 of the curve's
+        // flow range rather than of the (possibly tiny) flow itself.
+        const scale = pump.flowRange.max;
+        expectAbsolute(s[0]?.flow ?? 0, q1, 1e-10 * scale);
+        expectAbsolute(s[1]?.flow ?? 0, q1, 1e-10 * scale);
         // efficiency of the pair equals each pump's
         expectRelative(two.efficiency((2 * q1) as Flow), pump.efficiency(q1), 1e-9);
       }),
