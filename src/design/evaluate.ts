@@ -24,6 +24,7 @@ import {
   type Power,
   type Pressure,
   type RotationalSpeed,
+  STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
 import { CAUTIONS } from './cautions';
@@ -727,7 +728,7 @@ function evaluateCandidate(
   if (limits.designPressure !== undefined) {
     for (const s of family) {
       const def = s.curve.definition;
-      const rhoG = def.fluid.density * (def.g ?? 9.80665);
+      const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
       const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
       const maxPressure =
         def.suction.pressure + rhoG * (def.suction.elevation - pumpElevation) + rhoG * setShutoff;

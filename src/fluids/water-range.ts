@@ -5,7 +5,7 @@
  * @module
  */
 import { argumentError, HeadflowError } from '../errors';
-import { showPressure, showTemperature } from './checks';
+import { checkStateInput, showPressure, showTemperature } from './checks';
 import { SATURATION_P_MIN, saturationPressureSI, saturationTemperatureSI } from './if97-region4';
 
 /** Lower temperature bound of IF97 region 1 (and of headflow's liquid water), 273.15 K. */
@@ -29,21 +29,7 @@ const P_SAT_AT_T_MAX = saturationPressureSI(WATER_T_MAX);
  */
 export function checkLiquidWater(temperature: number, pressure: number, index = -1): void {
   const tName = index < 0 ? 'temperature' : `temperatures[${String(index)}]`;
-  if (typeof temperature !== 'number' || !Number.isFinite(temperature)) {
-    throw argumentError('INVALID_ARGUMENT', tName, temperature, 'K', 'a finite temperature');
-  }
-  if (temperature < 0) {
-    throw argumentError('INVALID_ARGUMENT', tName, temperature, 'K', '>= 0 K (absolute)');
-  }
-  if (typeof pressure !== 'number' || !Number.isFinite(pressure) || pressure < 0) {
-    throw argumentError(
-      'INVALID_ARGUMENT',
-      'pressure',
-      pressure,
-      'Pa',
-      'a finite absolute pressure >= 0 Pa',
-    );
-  }
+  checkStateInput(temperature, pressure, tName);
   if (temperature < WATER_T_MIN) {
     throw new HeadflowError(
       'OUT_OF_RANGE',

@@ -1,7 +1,8 @@
 import { argumentError } from '../errors';
+import { UNITS } from '../units/index';
 
 /** Metres per inch, exact (NIST SP 811 B.8): the 2-K and 3-K size terms take inches. */
-export const METRES_PER_INCH = 0.0254;
+export const METRES_PER_INCH = UNITS.in.factor;
 
 /**
  * Throws `INVALID_ARGUMENT` unless `re` is a finite number > 0 (the 1/Re term of the 2-K and

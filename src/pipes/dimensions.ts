@@ -4,10 +4,10 @@
  *
  * @module
  */
-import type { Length } from '../units/index';
+import { type Length, UNITS } from '../units/index';
 
 /** Exact metres per inch (NIST SP 811, B.8). */
-export const METRES_PER_INCH = 0.0254;
+export const METRES_PER_INCH = UNITS.in.factor;
 
 /** Dimensions of one pipe or tube, lengths in metres. */
 export interface PipeDimensions {

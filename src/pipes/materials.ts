@@ -4,11 +4,11 @@
  * @module
  */
 import { argumentError } from '../errors';
-import type { Length } from '../units/index';
+import { type Length, UNITS } from '../units/index';
 import { MATERIALS, type MaterialName, type MaterialRow } from './data/materials';
 
 /** Feet in metres, exact (NIST SP 811, B.8). */
-const METRES_PER_FOOT = 0.3048;
+const METRES_PER_FOOT = UNITS.ft.factor;
 
 /** A length range, metres. */
 export interface LengthRange {

@@ -5,11 +5,12 @@ import {
   type Flow,
   type Power,
   STANDARD_GRAVITY,
+  UNITS,
 } from '../units/index';
 import { fmt, maximize } from './internal';
 import type { Pump } from './types';
 
-const HP = 550 * 0.3048 * 0.45359237 * 9.80665; // W, mechanical horsepower (NIST SP 811)
+const HP = UNITS.hp.factor; // W, mechanical horsepower (NIST SP 811)
 
 /**
  * Standard horsepower ratings of NEMA MG 1 ("Motors and Generators"): fractional ratings of

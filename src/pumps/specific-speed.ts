@@ -1,12 +1,12 @@
 import { argumentError, checkPositive } from '../errors';
-import type { Flow, Length, RotationalSpeed } from '../units/index';
+import { type Flow, type Length, type RotationalSpeed, UNITS } from '../units/index';
 
 /** Unit system of a specific speed: SI (rpm, m3/s, m) or US customary (rpm, gal/min, ft). */
 export type SpecificSpeedUnits = 'si' | 'us';
 
 const RPM = (2 * Math.PI) / 60; // rad/s per rpm
-const GPM = (231 * 0.0254 ** 3) / 60; // m3/s per US gal/min, exact (NIST SP 811)
-const FOOT = 0.3048; // m, exact
+const GPM = UNITS['gal/min'].factor; // m3/s per US gal/min, exact (NIST SP 811)
+const FOOT = UNITS.ft.factor; // m, exact
 
 /**
  * Ratio of the US customary to the SI form of specific speed (and of suction specific
