@@ -53,3 +53,28 @@ describe('end to end: the cooling-loop example against the lower-level API', () 
       expect(c.checks.some((k) => k.id === 'shutoff-pressure')).toBe(false);
   });
 });
+
+describe('the same design as a scenario file (docs/examples/cooling-loop.json)', () => {
+  it('reads into a design whose report matches the code version to rounding', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { readScenario, evaluateDesign } = await import('../../src/design');
+    const text = readFileSync(
+      new URL('../../docs/examples/cooling-loop.json', import.meta.url),
+      'utf8',
+    );
+    const fromFile = evaluateDesign(readScenario(text, { source: 'cooling-loop.json' }));
+    expect(fromFile.candidates.map((c) => c.name)).toEqual(report.candidates.map((c) => c.name));
+    fromFile.duty.forEach((d, i) => {
+      expectRelative(d.head, report.duty[i]?.head ?? 0, 1e-12, d.case);
+      expectRelative(d.npshAvailable ?? 0, report.duty[i]?.npshAvailable ?? 0, 1e-12, d.case);
+    });
+    fromFile.candidates.forEach((c, i) => {
+      c.cases.forEach((r, j) => {
+        const other = report.candidates[i]?.cases[j];
+        expectRelative(r.flow ?? 0, other?.flow ?? 0, 1e-12);
+        expectRelative(r.shaftPower ?? 0, other?.shaftPower ?? 0, 1e-12);
+      });
+      expectRelative(c.energy?.kWh ?? 0, report.candidates[i]?.energy?.kWh ?? 0, 1e-12);
+    });
+  });
+});
