@@ -51,7 +51,7 @@ function positive(value: unknown, parameter: string, unit: string): number {
  * its data sheet, a glycol solution from a handbook table).
  *
  * Between rows the properties are interpolated in temperature by the monotone piecewise cubic
- * of Steffen (1990) (see {@link monotoneCubic}): density directly, viscosity and vapour
+ * of Steffen (1990) (the monotone cubic of src/numeric/interpolate.ts): density directly, viscosity and vapour
  * pressure through their logarithms (both vary roughly exponentially with temperature), so the
  * interpolant passes through every row, never overshoots between rows and keeps the trend of
  * the table. The table is taken as independent of pressure. Outside the table `at()` throws

@@ -5,7 +5,7 @@ import { STANDARD_GRAVITY } from '../units/index';
 /**
  * Head loss of a straight pipe by Darcy-Weisbach: `h = f (L/D) V^2 / (2 g)`.
  *
- * Exact for any regime once f is known (take f from {@link frictionFactor}). The head is a
+ * Exact for any regime once f is known (take f from the `frictionFactor` function). The head is a
  * height of the flowing fluid's column.
  *
  * Source: the Darcy-Weisbach equation (H. Darcy 1857, J. Weisbach 1845), as given in any
