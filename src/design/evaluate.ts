@@ -762,7 +762,13 @@ function evaluateCandidate(
   };
 }
 
-function sample(name: string, from: number, to: number, f: (q: number) => number): SampledCurve {
+function sample(
+  name: string,
+  from: number,
+  to: number,
+  f: (q: number) => number,
+  group?: string,
+): SampledCurve {
   const flows: number[] = [];
   const values: number[] = [];
   for (let i = 0; i < SAMPLES; i++) {
@@ -778,7 +784,7 @@ function sample(name: string, from: number, to: number, f: (q: number) => number
       values.push(v);
     }
   }
-  return { name, flows, values };
+  return group === undefined ? { name, flows, values } : { name, group, flows, values };
 }
 
 function curvesOf(
@@ -801,30 +807,45 @@ function curvesOf(
   const pumps: SampledCurve[] = [];
   const efficiency: SampledCurve[] = [];
   const npshRequired: SampledCurve[] = [];
-  const preferredRegions: { name: string; minFlow: number; maxFlow: number }[] = [];
+  const preferredRegions: { name: string; group: string; minFlow: number; maxFlow: number }[] = [];
   candidates.forEach((c, i) => {
     const full = c.maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(c.maxSpeed);
     const label = c.count > 1 ? `${c.name} (${c.count} in ${c.arrangement})` : c.name;
     const { min, max } = full.flowRange;
     pumps.push(
-      sample(label, c.setFlow(min), c.setFlow(max), (q) =>
-        c.setHead(full.head(c.pumpFlow(q) as Flow)),
+      sample(
+        label,
+        c.setFlow(min),
+        c.setFlow(max),
+        (q) => c.setHead(full.head(c.pumpFlow(q) as Flow)),
+        label,
       ),
     );
     efficiency.push(
-      sample(label, c.setFlow(min), c.setFlow(max), (q) => full.efficiency(c.pumpFlow(q) as Flow)),
+      sample(
+        label,
+        c.setFlow(min),
+        c.setFlow(max),
+        (q) => full.efficiency(c.pumpFlow(q) as Flow),
+        label,
+      ),
     );
     if (full.npshRange !== undefined) {
       const r = full.npshRange;
       npshRequired.push(
-        sample(label, c.setFlow(r.min), c.setFlow(r.max), (q) =>
-          full.npshRequired(c.pumpFlow(q) as Flow),
+        sample(
+          label,
+          c.setFlow(r.min),
+          c.setFlow(r.max),
+          (q) => full.npshRequired(c.pumpFlow(q) as Flow),
+          label,
         ),
       );
     }
     if (full.preferredRegion !== undefined) {
       preferredRegions.push({
         name: label,
+        group: label,
         minFlow: c.setFlow(full.preferredRegion.min),
         maxFlow: c.setFlow(full.preferredRegion.max),
       });
@@ -845,6 +866,7 @@ function curvesOf(
             c.setFlow(at.flowRange.min),
             c.setFlow(at.flowRange.max),
             (q) => c.setHead(at.head(c.pumpFlow(q) as Flow)),
+            label,
           ),
         );
       }

@@ -200,6 +200,8 @@ export interface CandidateReport {
 /** A curve sampled for charts: `values[i]` at `flows[i]` (SI: m3/s and m, or a fraction). */
 export interface SampledCurve {
   readonly name: string;
+  /** The candidate (set) a pump-side curve belongs to, so a chart can colour it alike. */
+  readonly group?: string;
   readonly flows: readonly number[];
   readonly values: readonly number[];
 }
@@ -219,6 +221,7 @@ export interface ReportCurves {
   /** Preferred operating region of each candidate set (flows of the set, m3/s). */
   readonly preferredRegions: readonly {
     readonly name: string;
+    readonly group?: string;
     readonly minFlow: number;
     readonly maxFlow: number;
   }[];

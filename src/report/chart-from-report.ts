@@ -27,10 +27,10 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
         'as many values as flows',
       );
     }
-    return {
-      name: c.name,
-      points: c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) })),
-    };
+    const points = c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) }));
+    return c.group === undefined
+      ? { name: c.name, points }
+      : { name: c.name, group: c.group, points };
   });
 }
 
@@ -73,6 +73,7 @@ export function chartSpecFromReport(
       name: r.name,
       minFlow: r.minFlow,
       maxFlow: r.maxFlow,
+      ...(r.group === undefined ? {} : { group: r.group }),
     })),
     efficiencyCurves: series('curves.efficiency', c.efficiency),
     npshRequired: series('curves.npshRequired', c.npshRequired),

@@ -29,6 +29,12 @@ export interface ChartSeries {
   readonly name: string;
   /** At least two points, coherent SI. */
   readonly points: readonly ChartPoint[];
+  /**
+   * Colour group: series and bands with the same group share a colour (for example every
+   * curve of one candidate: its head curves at each speed, efficiency, NPSH and region).
+   * Without it, colour follows the position in the list.
+   */
+  readonly group?: string;
 }
 
 /** A named operating point (where a pump curve meets a system curve). */
@@ -49,6 +55,12 @@ export interface ChartBand {
   readonly minFlow: number;
   /** Upper flow limit, m3/s, >= minFlow. */
   readonly maxFlow: number;
+  /**
+   * Colour group: series and bands with the same group share a colour (for example every
+   * curve of one candidate: its head curves at each speed, efficiency, NPSH and region).
+   * Without it, colour follows the position in the list.
+   */
+  readonly group?: string;
 }
 
 /**

@@ -31,6 +31,24 @@ const LABEL_CHAR = 0.6 * 11; // operating-point labels are 11 px
 const LEGEND_ROW = 18;
 
 const colour = (i: number): string => PALETTE[i % PALETTE.length] ?? '#000';
+
+/**
+ * The colour index of each series and band: by its `group` where it has one (all curves of a
+ * candidate share the group's colour, groups numbered in order of first appearance), else by
+ * its position in its own list.
+ */
+function colourIndex(
+  spec: ChartSpec,
+): (item: { readonly group?: string }, position: number) => number {
+  const groups: string[] = [];
+  const lists = [spec.pumpCurves, spec.efficiencyCurves, spec.npshRequired, spec.preferredRegions];
+  for (const list of lists) {
+    for (const item of list) {
+      if (item.group !== undefined && !groups.includes(item.group)) groups.push(item.group);
+    }
+  }
+  return (item, position) => (item.group === undefined ? position : groups.indexOf(item.group));
+}
 const dash = (i: number): string => CASE_DASHES[i % CASE_DASHES.length] ?? '';
 
 /** One line of the legend. */
@@ -132,21 +150,24 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     const full = kind ? `${name} (${kind})` : name;
     legend.push({ label: truncate(full, LABEL_CHARS), title: full, swatch });
   };
-  for (const [i, s] of spec.pumpCurves.entries()) add(s.name, '', lineSwatch(colour(i), ''));
+  const hue = colourIndex(spec);
+  for (const [i, s] of spec.pumpCurves.entries())
+    add(s.name, '', lineSwatch(colour(hue(s, i)), ''));
   for (const [i, s] of spec.systemCurves.entries()) {
     add(s.name, 'system', lineSwatch('#000', dash(i), 1.5));
   }
   for (const [i, s] of spec.efficiencyCurves.entries()) {
-    add(s.name, 'efficiency', lineSwatch(colour(i), '1 3'));
+    add(s.name, 'efficiency', lineSwatch(colour(hue(s, i)), '1 3'));
   }
   for (const [i, s] of spec.npshRequired.entries()) {
-    add(s.name, 'NPSH required', lineSwatch(colour(i), ''));
+    add(s.name, 'NPSH required', lineSwatch(colour(hue(s, i)), ''));
   }
   for (const [i, s] of npshA.entries()) {
     add(s.name, 'NPSH available', lineSwatch('#555', dash(i), 1.5));
   }
   for (const [i, b] of spec.preferredRegions.entries()) {
-    const swatch = `<rect x="2" y="-6" width="20" height="12" fill="${colour(i)}" fill-opacity="0.13" stroke="${colour(i)}" stroke-opacity="0.6" stroke-dasharray="3 3"/>`;
+    const c = colour(hue(b, i));
+    const swatch = `<rect x="2" y="-6" width="20" height="12" fill="${c}" fill-opacity="0.13" stroke="${c}" stroke-opacity="0.6" stroke-dasharray="3 3"/>`;
     add(b.name, 'preferred region', swatch);
   }
   if (spec.operatingPoints.length > 0) {
@@ -268,7 +289,7 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
       const x0 = x(flowOf(b.minFlow));
       const x1 = x(flowOf(b.maxFlow));
       push(
-        `<rect class="preferred-region" data-name="${escapeXml(b.name)}" x="${fmt(x0)}" y="${fmt(top)}" width="${fmt(x1 - x0)}" height="${fmt(mainHeight)}" fill="${colour(i)}" stroke="${colour(i)}"><title>${escapeXml(`${b.name}: preferred region ${fmtValue(flowOf(b.minFlow))} to ${fmtValue(flowOf(b.maxFlow))} ${fu}`)}</title></rect>`,
+        `<rect class="preferred-region" data-name="${escapeXml(b.name)}" x="${fmt(x0)}" y="${fmt(top)}" width="${fmt(x1 - x0)}" height="${fmt(mainHeight)}" fill="${colour(hue(b, i))}" stroke="${colour(hue(b, i))}"><title>${escapeXml(`${b.name}: preferred region ${fmtValue(flowOf(b.minFlow))} to ${fmtValue(flowOf(b.maxFlow))} ${fu}`)}</title></rect>`,
       );
     });
     push('</g>');
@@ -317,14 +338,14 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     list: readonly ChartSeries[],
     cls: string,
     gen: ReturnType<typeof path>,
-    style: (i: number) => string,
+    style: (s: ChartSeries, i: number) => string,
     group: string,
   ): void => {
     if (list.length === 0) return;
     push(`<g class="${cls}s" fill="none" ${group}>`);
     list.forEach((s, i) => {
       push(
-        `<path class="${cls}" data-name="${escapeXml(s.name)}" d="${gen(sorted(s)) ?? ''}" ${style(i)}/>`,
+        `<path class="${cls}" data-name="${escapeXml(s.name)}" d="${gen(sorted(s)) ?? ''}" ${style(s, i)}/>`,
       );
     });
     push('</g>');
@@ -334,21 +355,21 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     spec.systemCurves,
     'system-curve',
     headPath,
-    (i) => `stroke-dasharray="${dash(i)}"`,
+    (_, i) => `stroke-dasharray="${dash(i)}"`,
     'stroke="#000" stroke-width="1.5"',
   );
   drawSeries(
     spec.pumpCurves,
     'pump-curve',
     headPath,
-    (i) => `stroke="${colour(i)}"`,
+    (c, i) => `stroke="${colour(hue(c, i))}"`,
     'stroke-width="2.2"',
   );
   drawSeries(
     spec.efficiencyCurves,
     'efficiency-curve',
     path(yEff, (v) => v * 100),
-    (i) => `stroke="${colour(i)}"`,
+    (c, i) => `stroke="${colour(hue(c, i))}"`,
     'stroke-width="2" stroke-dasharray="1 3" stroke-linecap="round"',
   );
   const npshPath = path(yNpsh, headOf);
@@ -356,14 +377,14 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     spec.npshRequired,
     'npsh-required',
     npshPath,
-    (i) => `stroke="${colour(i)}"`,
+    (c, i) => `stroke="${colour(hue(c, i))}"`,
     'stroke-width="2"',
   );
   drawSeries(
     npshA,
     'npsh-available',
     npshPath,
-    (i) => `stroke-dasharray="${dash(i)}"`,
+    (_, i) => `stroke-dasharray="${dash(i)}"`,
     'stroke="#555" stroke-width="1.5"',
   );
 

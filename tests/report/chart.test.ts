@@ -620,3 +620,34 @@ describe('renderChart: properties', () => {
     );
   });
 });
+
+describe('colour groups', () => {
+  it('series and bands of one group share a colour; positions decide without a group', () => {
+    const grouped: ChartSpec = {
+      ...minimal,
+      pumpCurves: [
+        { ...line2('A full speed', 30, 10), group: 'A' },
+        { ...line2('B', 28, 12), group: 'B' },
+        { ...line2('A reduced', 20, 8), group: 'A' },
+      ],
+      efficiencyCurves: [
+        {
+          name: 'B eff',
+          group: 'B',
+          points: [
+            { flow: 0, value: 0 },
+            { flow: 0.04, value: 0.7 },
+          ],
+        },
+      ],
+      preferredRegions: [{ name: 'A region', group: 'A', minFlow: 0.01, maxFlow: 0.02 }],
+    };
+    const els = elements(renderChart(grouped));
+    const stroke = (cls: string, name: string): string | undefined =>
+      byClass(els, cls).find((e) => e.attrs['data-name'] === name)?.attrs['stroke'];
+    expect(stroke('pump-curve', 'A reduced')).toBe(stroke('pump-curve', 'A full speed'));
+    expect(stroke('pump-curve', 'B')).not.toBe(stroke('pump-curve', 'A full speed'));
+    expect(stroke('efficiency-curve', 'B eff')).toBe(stroke('pump-curve', 'B'));
+    expect(stroke('preferred-region', 'A region')).toBe(stroke('pump-curve', 'A full speed'));
+  });
+});
