@@ -248,7 +248,8 @@ describe('checks', () => {
       base({ limits: { designPressure: q(3, 'bar') }, candidates: [candidate()] }),
     );
     const k = r.candidates[0]?.checks.find((c) => c.id === 'shutoff-pressure');
-    // 101 325 Pa + rho g (0 - 0.5 m) + rho g 32 m > 300 kPa
+    // 101 325 Pa + rho g (0 - 0.5 m) + rho g 32 m > 300 kPa, rho = 998.2067 kg/m3 (water at
+    // 20 degC and 1 atm, IAPWS-IF97 region 1; tests/reference/iapws-if97.test.ts checks it)
     expectRelative(k?.values['maxPressure'] ?? 0, 101325 + 998.2067 * 9.80665 * 31.5, 1e-5);
     expect(k?.severity).toBe('error');
     const ok = evaluateDesign(
