@@ -53,10 +53,7 @@ export function specificSpeed(
   checkPositive('flow', flow, 'm3/s');
   checkPositive('headPerStage', headPerStage, 'm');
   check(units);
-  const n = speed / RPM;
-  return units === 'si'
-    ? (n * Math.sqrt(flow)) / headPerStage ** 0.75
-    : (n * Math.sqrt(flow / GPM)) / (headPerStage / FOOT) ** 0.75;
+  return speedNumber(speed, flow, headPerStage, units);
 }
 
 /**
@@ -91,8 +88,13 @@ export function suctionSpecificSpeed(
   checkPositive('flowPerEye', flowPerEye, 'm3/s');
   checkPositive('npshRequired', npshRequired, 'm');
   check(units);
+  return speedNumber(speed, flowPerEye, npshRequired, units);
+}
+
+/** `N Q^0.5 / H^0.75` with N in rpm and Q, H in SI (m3/s, m) or US (gal/min, ft) units. */
+function speedNumber(speed: number, flow: number, head: number, units: SpecificSpeedUnits): number {
   const n = speed / RPM;
   return units === 'si'
-    ? (n * Math.sqrt(flowPerEye)) / npshRequired ** 0.75
-    : (n * Math.sqrt(flowPerEye / GPM)) / (npshRequired / FOOT) ** 0.75;
+    ? (n * Math.sqrt(flow)) / head ** 0.75
+    : (n * Math.sqrt(flow / GPM)) / (head / FOOT) ** 0.75;
 }
