@@ -126,3 +126,17 @@ describe('getting started', () => {
     expect(lines).toEqual(expected);
   });
 });
+
+describe('every example file', () => {
+  const files = readdirSync(new URL('docs/examples/', root)).filter((f) => f.endsWith('.ts'));
+  const quoted = pages.map(read).join('\n');
+  it.each(files)('%s is quoted or named by a page and runs', async (file) => {
+    if (file !== 'demo.ts') expect(quoted).toContain(`docs/examples/${file}`);
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    try {
+      await import(`../../docs/examples/${file.replace(/\.ts$/, '')}`);
+    } finally {
+      log.mockRestore();
+    }
+  });
+});
