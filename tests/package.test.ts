@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { publicModules } from '../scripts/modules';
+import { publicModules } from '../.config/modules';
 
 interface PackageJson {
   readonly name: string;

@@ -4,7 +4,7 @@ import {
   SCENARIO_SCHEMA_PATH,
   scenarioJsonSchema,
   scenarioJsonSchemaText,
-} from '../../scripts/scenario-schema';
+} from '../../docs/tools/scenario-schema';
 
 const committed = readFileSync(new URL(`../../${SCENARIO_SCHEMA_PATH}`, import.meta.url), 'utf8');
 
@@ -12,7 +12,7 @@ const committed = readFileSync(new URL(`../../${SCENARIO_SCHEMA_PATH}`, import.m
 type Node = any;
 
 describe('docs/scenario.schema.json', () => {
-  it('is what scripts/scenario-schema.ts generates (run it after changing the format)', () => {
+  it('is what docs/tools/scenario-schema.ts generates (run it after changing the format)', () => {
     expect(JSON.parse(committed)).toEqual(JSON.parse(scenarioJsonSchemaText()));
   });
 

@@ -1,5 +1,5 @@
 import { defineConfig } from 'tsup';
-import { publicModules } from './scripts/modules';
+import { publicModules } from './modules';
 
 /** One entry for the root barrel and one per public module (see package.json "exports"). */
 const entry: Record<string, string> = { index: 'src/index.ts' };

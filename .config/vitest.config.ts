@@ -1,9 +1,12 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
-const src = fileURLToPath(new URL('./src/', import.meta.url));
+// This file lives in .config/; the project root is one folder up.
+const root = fileURLToPath(new URL('../', import.meta.url));
+const src = fileURLToPath(new URL('../src/', import.meta.url));
 
 export default defineConfig({
+  root,
   resolve: {
     // Examples and docs import 'headflow' as users do; in tests that name is the source tree.
     alias: [
