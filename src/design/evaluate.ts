@@ -12,6 +12,7 @@ import {
   operatingPoint,
   type ProfileRow,
   type PumpCurve,
+  type PumpShare,
   type SystemCurveLike,
   selectMotor,
   speedForFlow,
@@ -98,6 +99,10 @@ interface Candidate {
   readonly arrangement: Arrangement;
   readonly control: SpeedControl;
   readonly maxSpeed: RotationalSpeed;
+  /** The pump at its highest speed (the curve itself unless `maxSpeed` differs). */
+  readonly fullSpeed: PumpCurve;
+  /** Name of the set for charts: `"A (2 in parallel)"`, or the candidate's name. */
+  readonly label: string;
   /** Set flow from one pump's flow. */
   readonly setFlow: (q: number) => number;
   /** One pump's flow from the set's flow. */
@@ -236,6 +241,8 @@ function resolveCandidate(c: CandidateInput, i: number): Candidate {
     arrangement,
     control,
     maxSpeed,
+    fullSpeed: maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(maxSpeed),
+    label: count > 1 ? `${c.name} (${count} in ${arrangement})` : c.name,
     setFlow: (q) => q * n,
     pumpFlow: (q) => q / n,
     setHead: (h) => h * m,
@@ -385,13 +392,13 @@ function dutyInCase(
   };
 }
 
-function regionOf(pump: PumpCurve, flow: number): CaseResult['region'] {
-  const p = pump.preferredRegion;
-  const a = pump.allowableRegion;
-  if (p === undefined || a === undefined) return undefined;
-  if (flow >= p.min && flow <= p.max) return 'preferred';
-  if (flow >= a.min && flow <= a.max) return 'allowable';
-  return 'outside';
+/** The operating region of a pump's share, from the pumps module's own region test. */
+function regionOf(share: PumpShare | undefined): CaseResult['region'] {
+  if (share?.inPreferredRegion === undefined || share.inAllowableRegion === undefined) {
+    return undefined;
+  }
+  if (share.inPreferredRegion) return 'preferred';
+  return share.inAllowableRegion ? 'allowable' : 'outside';
 }
 
 function message(e: unknown): string {
@@ -435,7 +442,7 @@ function runCase(
       q = dutyPerPump;
       iterations = sp.iterations;
     } else {
-      if (c.maxSpeed !== c.pump.speed) pump = c.pump.atSpeed(c.maxSpeed);
+      pump = c.fullSpeed;
       const op = operatingPoint(pump, system);
       q = op.flow;
       iterations = op.iterations;
@@ -459,9 +466,9 @@ function runCase(
   const head = c.setHead(pump.head(q as Flow));
   const efficiency = pump.efficiency(q as Flow);
   const shaftPower = c.count * pump.shaftPower(q as Flow, fluid.density, s.curve.definition.g);
-  const bep = pump.bestEfficiencyPoint;
-  const percentOfBep = bep === undefined ? undefined : (100 * q) / bep.flow;
-  const region = regionOf(pump, q);
+  const share = pump.shares(q as Flow)[0];
+  const percentOfBep = share?.percentOfBep;
+  const region = regionOf(share);
   if (c.control === 'fixed' && Math.abs(flow - input.dutyFlow) > 0.02 * input.dutyFlow) {
     const short = flow < input.dutyFlow;
     checks.push(
@@ -611,7 +618,7 @@ function evaluateCandidate(
   const design = family[0] as ScenarioCurve;
   const density = design.curve.definition.fluid.density;
   const series = c.input.motorSeries ?? 'iec';
-  const fullSpeed = c.maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(c.maxSpeed);
+  const fullSpeed = c.fullSpeed;
   let maxShaftPower: Power | undefined;
   let motor: CandidateReport['motor'];
   let dutyOnlyMotor: CandidateReport['dutyOnlyMotor'];
@@ -794,23 +801,15 @@ function curvesOf(
   family: readonly ScenarioCurve[],
 ): ReportCurves {
   let qMax = input.dutyFlow * 1.5;
-  for (const c of candidates)
-    qMax = Math.max(
-      qMax,
-      c.setFlow(
-        c.maxSpeed === c.pump.speed
-          ? c.pump.flowRange.max
-          : c.pump.atSpeed(c.maxSpeed).flowRange.max,
-      ),
-    );
+  for (const c of candidates) qMax = Math.max(qMax, c.setFlow(c.fullSpeed.flowRange.max));
   const systems = family.map((s) => sample(s.name, 0, qMax, (q) => s.curve.head(q as Flow)));
   const pumps: SampledCurve[] = [];
   const efficiency: SampledCurve[] = [];
   const npshRequired: SampledCurve[] = [];
   const preferredRegions: { name: string; group: string; minFlow: number; maxFlow: number }[] = [];
   candidates.forEach((c, i) => {
-    const full = c.maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(c.maxSpeed);
-    const label = c.count > 1 ? `${c.name} (${c.count} in ${c.arrangement})` : c.name;
+    const full = c.fullSpeed;
+    const label = c.label;
     const { min, max } = full.flowRange;
     pumps.push(
       sample(
