@@ -289,35 +289,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     g,
     friction: definition.friction,
   };
-  let position = 0;
-  const elements: Element[] = definition.runs.map((el, i): Element => {
-    if ('kind' in el && el.kind === 'parallel') {
-      const groupName = el.name ?? `parallel ${i + 1}`;
-      if (el.branches.length < 2) {
-        throw argumentError(
-          'INVALID_ARGUMENT',
-          `${groupName}.branches`,
-          el.branches.length,
-          'branches',
-          'at least 2',
-        );
-      }
-      const branches = el.branches.map((b, j) => {
-        if (b.length === 0) {
-          throw argumentError(
-            'INVALID_ARGUMENT',
-            `${groupName}.branches[${j}]`,
-            0,
-            'runs',
-            'at least one run',
-          );
-        }
-        return b.map((r) => runEvaluator(pipeRun(r, ++position, aged)));
-      });
-      return { kind: 'parallel', group: { name: groupName, branches } };
-    }
-    return { kind: 'run', ev: runEvaluator(pipeRun(el as PipeRunInput, ++position, aged)) };
-  });
+  const elements = buildLine(definition.runs, aged);
   const rhoG = fluid.density * g;
   const staticHead =
     discharge.elevation - suction.elevation + (discharge.pressure - suction.pressure) / rhoG;
@@ -434,15 +406,40 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
 
 /** Every run of a definition, validated (for reports that list the line). */
 export function runsOf(definition: SystemDefinition): readonly PipeRun[] {
-  const out: PipeRun[] = [];
+  return buildLine(definition.runs, definition.aged === true).flatMap((el) =>
+    el.kind === 'run' ? [el.ev.run] : el.group.branches.flat().map((ev) => ev.run),
+  );
+}
+
+/** Validates the line and builds each run's evaluator, numbering runs in flow order. */
+function buildLine(runs: readonly LineElement[], aged: boolean): Element[] {
   let position = 0;
-  for (const el of definition.runs) {
+  return runs.map((el, i): Element => {
     if ('kind' in el && el.kind === 'parallel') {
-      for (const b of el.branches)
-        for (const r of b) out.push(pipeRun(r, ++position, definition.aged === true));
-    } else {
-      out.push(pipeRun(el as PipeRunInput, ++position, definition.aged === true));
+      const groupName = el.name ?? `parallel ${i + 1}`;
+      if (el.branches.length < 2) {
+        throw argumentError(
+          'INVALID_ARGUMENT',
+          `${groupName}.branches`,
+          el.branches.length,
+          'branches',
+          'at least 2',
+        );
+      }
+      const branches = el.branches.map((b, j) => {
+        if (b.length === 0) {
+          throw argumentError(
+            'INVALID_ARGUMENT',
+            `${groupName}.branches[${j}]`,
+            0,
+            'runs',
+            'at least one run',
+          );
+        }
+        return b.map((r) => runEvaluator(pipeRun(r, ++position, aged)));
+      });
+      return { kind: 'parallel', group: { name: groupName, branches } };
     }
-  }
-  return out;
+    return { kind: 'run', ev: runEvaluator(pipeRun(el as PipeRunInput, ++position, aged)) };
+  });
 }
