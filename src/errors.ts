@@ -63,14 +63,28 @@ export class HeadflowError extends Error {
   /** Allowed range or set, in words. */
   readonly allowed: string | undefined;
 
-  constructor(code: HeadflowErrorCode, message: string, details: HeadflowErrorDetails = {}) {
-    super(message);
+  /**
+   * Constructs with any arguments without throwing: a missing or null `details` means none, and
+   * a message or code of the wrong type is turned into a string rather than refused.
+   */
+  constructor(code: HeadflowErrorCode, message: string, details: HeadflowErrorDetails | null = {}) {
+    super(typeof message === 'string' ? message : safeString(message));
     this.name = 'HeadflowError';
-    this.code = code;
-    this.parameter = details.parameter;
-    this.value = details.value;
-    this.unit = details.unit;
-    this.allowed = details.allowed;
+    this.code = typeof code === 'string' ? code : 'INVALID_ARGUMENT';
+    const d: HeadflowErrorDetails = typeof details === 'object' && details !== null ? details : {};
+    this.parameter = typeof d.parameter === 'string' ? d.parameter : undefined;
+    this.value = d.value;
+    this.unit = typeof d.unit === 'string' ? d.unit : undefined;
+    this.allowed = typeof d.allowed === 'string' ? d.allowed : undefined;
+  }
+}
+
+/** `String(x)` that cannot throw (a Symbol, a null-prototype object). */
+function safeString(x: unknown): string {
+  try {
+    return String(x);
+  } catch {
+    return typeof x;
   }
 }
 
