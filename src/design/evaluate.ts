@@ -6,6 +6,8 @@
 import { argumentError, checkFraction, checkPositive, HeadflowError } from '../errors';
 import {
   annualEnergy,
+  CATALOGUE_FIT_TOLERANCE,
+  type FitReport,
   motorForPump,
   npshAvailable,
   npshMargin,
@@ -614,6 +616,7 @@ function evaluateCandidate(
   profile: readonly ProfileRow[],
 ): Omit<CandidateReport, 'rank'> {
   const checks: Check[] = [];
+  curveFitChecks(c, checks);
   const cases = family.map((s) => runCase(input, c, s, limits, checks));
   const design = family[0] as ScenarioCurve;
   const density = design.curve.definition.fluid.density;
@@ -764,9 +767,56 @@ function evaluateCandidate(
     motor,
     dutyOnlyMotor,
     energy,
+    curveFit: { head: c.pump.fits.head, efficiency: c.pump.fits.efficiency },
     checks,
     passed: !checks.some((k) => k.severity === 'error'),
   };
+}
+
+/**
+ * Warns when a head or efficiency fit misses the catalogue tolerance (head within 0.5 % of
+ * each point, efficiency within 0.5 percentage point). The default fits always meet it, so
+ * this concerns a fit the caller chose.
+ */
+function curveFitChecks(c: Candidate, checks: Check[]): void {
+  const { head, efficiency } = c.pump.fits;
+  if (head.withinTolerance === false) {
+    checks.push(
+      check(
+        'curve-fit',
+        'warning',
+        c.name,
+        undefined,
+        `The head fit (${fitName(head)}) misses a catalogue point by ${fmt(100 * head.maxRelativeResidual, 3)} % of its head, more than the tolerance of ${fmt(100 * CATALOGUE_FIT_TOLERANCE.headRelative, 2)} %: the operating points and power move with it. Use the default fit (through every point) or another degree.`,
+        {
+          maxResidual: head.maxResidual,
+          maxRelativeResidual: head.maxRelativeResidual,
+          tolerance: CATALOGUE_FIT_TOLERANCE.headRelative,
+        },
+        COMMON,
+      ),
+    );
+  }
+  if (efficiency?.withinTolerance === false) {
+    checks.push(
+      check(
+        'curve-fit',
+        'warning',
+        c.name,
+        undefined,
+        `The efficiency fit (${fitName(efficiency)}) misses a catalogue point by ${fmt(100 * efficiency.maxResidual, 3)} percentage points, more than the tolerance of ${fmt(100 * CATALOGUE_FIT_TOLERANCE.efficiency, 2)} percentage point: the BEP, the power and the yearly energy move with it. Use the default fit or another degree.`,
+        {
+          maxResidual: efficiency.maxResidual,
+          tolerance: CATALOGUE_FIT_TOLERANCE.efficiency,
+        },
+        COMMON,
+      ),
+    );
+  }
+}
+
+function fitName(f: FitReport): string {
+  return f.method === 'polynomial' ? `polynomial of degree ${f.degree ?? '?'}` : 'monotone cubic';
 }
 
 function sample(

@@ -4,7 +4,7 @@
  *
  * @module
  */
-import type { MotorRating, MotorSeries, ProfileRow, PumpCurve } from '../pumps/index';
+import type { FitReport, MotorRating, MotorSeries, ProfileRow, PumpCurve } from '../pumps/index';
 import type { OperatingCase, RunDetails, SystemDefinition } from '../system/index';
 import type {
   Flow,
@@ -189,6 +189,12 @@ export interface CandidateReport {
         readonly cost: { readonly amount: number; readonly currency: string } | undefined;
       }
     | undefined;
+  /**
+   * How the pump's head and efficiency curves fit its catalogue points (at the catalogue speed
+   * and diameter): method, degree, default or given, largest residual and whether it lies
+   * within the catalogue tolerance (head 0.5 %, efficiency 0.5 percentage point).
+   */
+  readonly curveFit: { readonly head: FitReport; readonly efficiency: FitReport | undefined };
   /** Checks of this candidate. */
   readonly checks: readonly Check[];
   /** True when no check of this candidate is an error. */

@@ -37,7 +37,12 @@ export {
   operatingPoint,
 } from './operating-point';
 export { hydraulicPower, type PowerChain, type PowerChainInput, powerChain } from './power';
-export { DEFAULT_PREFERRED_REGION, type PumpCurveInput, pumpCurve } from './pump-curve';
+export {
+  CATALOGUE_FIT_TOLERANCE,
+  DEFAULT_PREFERRED_REGION,
+  type PumpCurveInput,
+  pumpCurve,
+} from './pump-curve';
 export {
   SPECIFIC_SPEED_US_PER_SI,
   type SpecificSpeedUnits,

@@ -18,13 +18,57 @@ export interface Kernel {
   readonly report: FitReport;
 }
 
+/**
+ * How closely a fitted head or efficiency curve must pass by each catalogue point to count as
+ * faithful to the catalogue: head within 0.5 % of the point's head (`headRelative`),
+ * efficiency within 0.5 percentage point (`efficiency`, a difference of fractions).
+ *
+ * The bounds are of the order of the reading accuracy of a printed catalogue curve (common
+ * practice) and well inside the acceptance tolerances of a pump test (ISO 9906:2012 grade 1B:
+ * flow +-5 %, head +-3 %, efficiency -3 % of its value; from memory), so a fit within them
+ * adds no error that matters to the selection.
+ */
+export const CATALOGUE_FIT_TOLERANCE = { headRelative: 0.005, efficiency: 0.005 } as const;
+
+/** Highest polynomial degree the default efficiency rule tries before the monotone cubic. */
+const MAX_DEFAULT_DEGREE = 8;
+
+/** Which curve a kernel is for: head and efficiency are held to the catalogue tolerance. */
+type CurveName = 'head' | 'efficiency' | 'npshRequired' | 'shaftPower';
+
+/** Largest absolute and relative residual of `f` at the points. */
+function residuals(
+  xs: readonly number[],
+  ys: readonly number[],
+  f: (x: number) => number,
+): { maxAbs: number; maxRel: number } {
+  let maxAbs = 0;
+  let maxRel = 0;
+  for (let i = 0; i < xs.length; i++) {
+    const y = ys[i] as number;
+    const r = Math.abs(y - f(xs[i] as number));
+    if (r > maxAbs) maxAbs = r;
+    if (y !== 0 && r / Math.abs(y) > maxRel) maxRel = r / Math.abs(y);
+  }
+  return { maxAbs, maxRel };
+}
+
+/** Whether residuals meet the catalogue tolerance (head, efficiency), else undefined. */
+function within(name: CurveName, maxAbs: number, maxRel: number): boolean | undefined {
+  // The tolerances are compared with a hair of slack for round-off in the fit itself.
+  if (name === 'head') return maxRel <= CATALOGUE_FIT_TOLERANCE.headRelative * (1 + 1e-9);
+  if (name === 'efficiency') return maxAbs <= CATALOGUE_FIT_TOLERANCE.efficiency * (1 + 1e-9);
+  return undefined;
+}
+
 /** Fits one catalogue curve. `name` is used in messages ("head", "efficiency" ...). */
 export function fitKernel(
-  name: string,
+  name: CurveName,
   xs: readonly number[],
   ys: readonly number[],
   spec: CurveFit,
   throughOrigin: boolean,
+  selection: FitReport['selection'] = 'given',
 ): Kernel {
   const first = xs[0] ?? 0;
   const last = xs[xs.length - 1] ?? 0;
@@ -40,9 +84,12 @@ export function fitKernel(
       report: {
         method: 'monotone',
         degree: undefined,
+        selection,
         points: xs.length,
         rms: 0,
         maxResidual: 0,
+        maxRelativeResidual: 0,
+        withinTolerance: within(name, 0, 0),
         rSquared: 1,
       },
     };
@@ -68,6 +115,7 @@ export function fitKernel(
     );
   }
   const p = polynomialLeastSquares(xs, ys, spec.degree, { throughOrigin, scale: last });
+  const r = residuals(xs, ys, p.evaluate);
   return {
     xMin: first,
     xMax: last,
@@ -76,12 +124,63 @@ export function fitKernel(
     report: {
       method: 'polynomial',
       degree: spec.degree,
+      selection,
       points: xs.length,
       rms: p.rms,
       maxResidual: p.maxResidual,
+      maxRelativeResidual: r.maxRel,
+      withinTolerance: within(name, r.maxAbs, r.maxRel),
       rSquared: p.rSquared,
     },
   };
+}
+
+/**
+ * The default efficiency curve: faithful to the catalogue and smooth.
+ *
+ * Tries least-squares polynomials through the origin of degree min(3, n) up to min(n, 8)
+ * (n = points above zero flow) and keeps the first that (a) passes within
+ * {@link CATALOGUE_FIT_TOLERANCE} of every point, (b) stays inside (0, 1] on a grid of 513
+ * flows over `[xMin, xMax]` and (c) has one hump: once it falls it never rises again by more
+ * than round-off on that grid (a catalogue efficiency curve rises to its BEP and falls). When
+ * none does, it takes the monotone cubic through (0, 0) and every point (Steffen 1990), which
+ * passes through each point exactly, is continuous with a continuous slope, and overshoots
+ * nowhere (its BEP is then the best catalogue point).
+ */
+export function defaultEfficiencyKernel(
+  xs: readonly number[],
+  ys: readonly number[],
+  xMin: number,
+  xMax: number,
+): Kernel {
+  const n = xs.filter((x) => x > 0).length;
+  for (let degree = Math.min(3, n); degree <= Math.min(n, MAX_DEFAULT_DEGREE); degree++) {
+    let k: Kernel;
+    try {
+      k = fitKernel('efficiency', xs, ys, { method: 'polynomial', degree }, true, 'default');
+    } catch {
+      continue; // a rank-deficient degree: try the next
+    }
+    if (k.report.withinTolerance === true && oneHumpInRange(k, xMin, xMax)) return k;
+  }
+  return fitKernel('efficiency', xs, ys, { method: 'monotone' }, true, 'default');
+}
+
+/** True when `k` stays in (0, 1] on (xMin, xMax] and rises then falls (no interior dip). */
+function oneHumpInRange(k: Kernel, xMin: number, xMax: number): boolean {
+  const steps = 512;
+  let prev = k.evaluate(xMin);
+  let falling = false;
+  for (let i = 1; i <= steps; i++) {
+    const x = i === steps ? xMax : xMin + ((xMax - xMin) * i) / steps;
+    const v = k.evaluate(x);
+    if (!(v > 0 && v <= 1)) return false;
+    const slack = 1e-12 * Math.max(1, Math.abs(v));
+    if (v < prev - slack) falling = true;
+    else if (falling && v > prev + slack) return false;
+    prev = v;
+  }
+  return true;
 }
 
 /** Relative slack for range checks: flows within this fraction of the range's end count as in. */

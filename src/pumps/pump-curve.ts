@@ -14,7 +14,18 @@ import {
   type RotationalSpeed,
   STANDARD_GRAVITY,
 } from '../units/index';
-import { fitKernel, fmt, inRange, type Kernel, maximize } from './internal';
+import {
+  CATALOGUE_FIT_TOLERANCE,
+  defaultEfficiencyKernel,
+  fitKernel,
+  fmt,
+  inRange,
+  type Kernel,
+  maximize,
+} from './internal';
+
+export { CATALOGUE_FIT_TOLERANCE };
+
 import type {
   BestEfficiencyPoint,
   CataloguePoint,
@@ -87,11 +98,25 @@ function gridFlow(a: number, b: number, k: number): number {
  *
  * Fits: head by a monotone piecewise cubic (Steffen 1990, through every point, default) or a
  * least-squares polynomial of a chosen degree; efficiency by a least-squares polynomial
- * through the origin (default, degree min(3, points)) or the monotone cubic with the point
- * (0, 0) added; NPSH required and shaft power by either. Residuals (RMS, max) and R^2 of each
- * fit are reported in `fits`. Head must be non-increasing with flow, in the points and in the
- * fitted curve (checked on a grid of 513 flows); a rising curve is refused. The efficiency fit
- * must stay inside (0, 1] over the flow range.
+ * through the origin of a chosen degree or the monotone cubic with the point (0, 0) added;
+ * NPSH required and shaft power by either.
+ *
+ * Faithful by default: the default curves pass within {@link CATALOGUE_FIT_TOLERANCE} of every
+ * catalogue point (head within 0.5 % of each point's head, efficiency within 0.5 percentage
+ * point). The head default goes through every point. The efficiency default tries
+ * least-squares polynomials through the origin from degree min(3, n) up to min(n, 8) (n
+ * points above zero flow) and keeps the first within the tolerance that stays in (0, 1] and
+ * has a single hump; otherwise it takes the monotone cubic through (0, 0) and every point
+ * (exact at the points, continuous slope, no overshoot, so its BEP is then the best catalogue
+ * point). A fit you name is used as given; `fits` reports for each curve the method, the
+ * degree, whether it was the default or given, RMS and largest residual (absolute and
+ * relative), R^2 and, for head and efficiency, `withinTolerance` (the design report warns when
+ * a given fit misses the tolerance). Head must be non-increasing with flow, in the points and
+ * in the fitted curve (checked on a grid of 513 flows); a rising curve is refused. The
+ * efficiency fit must stay inside (0, 1] over the flow range.
+ *
+ * A single rated point (one flow, head and efficiency from a nameplate or data sheet) is not a
+ * curve and is refused: give at least 3 points read from the manufacturer's curve.
  *
  * Best efficiency point: the maximum of the efficiency fit over the flow range (grid scan,
  * then golden-section search). Operating regions: preferred 70-120 % of BEP flow by default
@@ -153,6 +178,10 @@ function buildBase(input: PumpCurveInput): Base {
       Array.isArray(points) ? points.length : 0,
       'points',
       'at least 3 catalogue points',
+      'A rated point alone (one flow, head and efficiency) is not a curve: the operating point, ' +
+        'the BEP and the motor check need the shape of the curve. Read at least 3 points off the ' +
+        "manufacturer's curve for this impeller and speed, from shut-off (or the lowest flow shown) " +
+        'to the end of the curve, each with its head and efficiency.',
     );
   }
   const n = points.length;
@@ -297,7 +326,7 @@ function buildBase(input: PumpCurveInput): Base {
   }
   const fits = input.fit ?? {};
   const headSpec: CurveFit = fits.head ?? { method: 'monotone' };
-  const head = fitKernel('head', q, h, headSpec, false);
+  const head = fitKernel('head', q, h, headSpec, false, fits.head ? 'given' : 'default');
   const first = q[0] as number;
   const last = q[n - 1] as number;
   let xMin = first;
@@ -345,17 +374,15 @@ function buildBase(input: PumpCurveInput): Base {
   let power: Kernel | undefined;
   let effFn: ((x: number) => number) | undefined;
   if (effQ.length > 0) {
-    const nonZero = effQ.filter((v) => v > 0).length;
-    const spec: CurveFit = fits.efficiency ?? {
-      method: 'polynomial',
-      degree: Math.min(3, nonZero),
-    };
-    efficiency = fitKernel('efficiency', effQ, eff, spec, true);
+    efficiency =
+      fits.efficiency === undefined
+        ? defaultEfficiencyKernel(effQ, eff, xMin, last)
+        : fitKernel('efficiency', effQ, eff, fits.efficiency, true);
     const k = efficiency;
     effFn = (x) => k.evaluate(x);
   } else if (powQ.length > 0) {
     const spec: CurveFit = fits.shaftPower ?? { method: 'monotone' };
-    power = fitKernel('shaftPower', powQ, pow, spec, false);
+    power = fitKernel('shaftPower', powQ, pow, spec, false, fits.shaftPower ? 'given' : 'default');
     const pk = power;
     effFn = (x) =>
       x === 0 ? 0 : (powerDensity * STANDARD_GRAVITY * x * head.evaluate(x)) / pk.evaluate(x);
@@ -402,7 +429,7 @@ function buildBase(input: PumpCurveInput): Base {
         'at least 2 points with NPSH required, or none',
       );
     }
-    npsh = fitKernel('npshRequired', npQ, np, spec, false);
+    npsh = fitKernel('npshRequired', npQ, np, spec, false, fits.npshRequired ? 'given' : 'default');
     for (let i = 0; i <= GRID; i++) {
       const x = gridFlow(npsh.xMin, npsh.xMax, i);
       const v = npsh.evaluate(x);

@@ -88,11 +88,14 @@ export type CurveFit =
 
 /** Fit of each catalogue curve; any left out takes its default. */
 export interface PumpCurveFits {
-  /** Head-flow curve. Default `{ method: 'monotone' }`. */
+  /** Head-flow curve. Default `{ method: 'monotone' }` (through every point). */
   readonly head?: CurveFit;
   /**
    * Efficiency curve. A polynomial is fitted through the origin (efficiency is 0 at zero
-   * flow). Default `{ method: 'polynomial', degree: min(3, number of points) }`.
+   * flow). Default: the catalogue-faithful rule of `pumpCurve` (a least-squares polynomial
+   * through the origin of degree 3 or more that passes within
+   * the catalogue tolerance (`CATALOGUE_FIT_TOLERANCE`) of every point and keeps one hump, else the monotone
+   * cubic through every point).
    */
   readonly efficiency?: CurveFit;
   /** NPSH-required curve. Default `{ method: 'monotone' }`. */
@@ -106,12 +109,25 @@ export interface FitReport {
   readonly method: 'polynomial' | 'monotone';
   /** Polynomial degree, or undefined for the monotone cubic. */
   readonly degree: number | undefined;
+  /** `'given'` when the caller named the fit, `'default'` when the default rule chose it. */
+  readonly selection: 'default' | 'given';
   /** Number of points fitted. */
   readonly points: number;
   /** RMS of the residuals, in SI units of the curve (m, fraction, W). 0 for the monotone cubic. */
   readonly rms: number;
-  /** Largest |residual|, in SI units of the curve. 0 for the monotone cubic. */
+  /**
+   * Largest |residual| (catalogue value minus fitted value), in SI units of the curve (m of
+   * head, efficiency as a fraction, W). 0 for the monotone cubic.
+   */
   readonly maxResidual: number;
+  /** Largest |residual| / |catalogue value| over the points whose value is not 0 (a fraction). */
+  readonly maxRelativeResidual: number;
+  /**
+   * For head and efficiency: true when the fit passes within the catalogue tolerance (`CATALOGUE_FIT_TOLERANCE`)
+   * of every catalogue point (head within 0.5 % of each point's head, efficiency within 0.5
+   * percentage point). Undefined for NPSH required and shaft power.
+   */
+  readonly withinTolerance: boolean | undefined;
   /** Coefficient of determination. 1 for the monotone cubic. */
   readonly rSquared: number;
 }

@@ -16,8 +16,8 @@ import type {
   UnitSystem,
 } from '../design/index';
 import { displayUnits } from '../design/index';
-import type { MotorRating } from '../pumps/index';
-import type { Power } from '../units/index';
+import type { FitReport, MotorRating } from '../pumps/index';
+import type { Length, Power } from '../units/index';
 import {
   DASH,
   formatFixed,
@@ -169,6 +169,36 @@ function energyRows(c: CandidateReport): [string, string][] {
   ];
 }
 
+function fitMethod(f: FitReport): string {
+  const how =
+    f.method === 'polynomial'
+      ? `least-squares polynomial of degree ${f.degree ?? DASH}`
+      : 'monotone cubic through every point';
+  return `${how} (${f.selection})`;
+}
+
+function toleranceNote(f: FitReport): string {
+  return f.withinTolerance === false ? '; OUTSIDE the catalogue tolerance' : '';
+}
+
+/** The curve-fit rows: method and largest residual of the head and efficiency fits. */
+function fitRows(c: CandidateReport, u: DisplayUnits): [string, string][] {
+  const { head, efficiency } = c.curveFit;
+  const rows: [string, string][] = [
+    [
+      'Head curve fit',
+      `${fitMethod(head)}; largest residual ${formatWithUnit(head.maxResidual as Length, u.head, 3)} (${formatFixed(100 * head.maxRelativeResidual, 2)} % of the point's head)${toleranceNote(head)}`,
+    ],
+  ];
+  if (efficiency !== undefined) {
+    rows.push([
+      'Efficiency curve fit',
+      `${fitMethod(efficiency)}; largest residual ${formatFixed(100 * efficiency.maxResidual, 2)} percentage points${toleranceNote(efficiency)}`,
+    ]);
+  }
+  return rows;
+}
+
 function candidateBlocks(c: CandidateReport, u: DisplayUnits): Block[] {
   const blocks: Block[] = [
     {
@@ -193,6 +223,7 @@ function candidateBlocks(c: CandidateReport, u: DisplayUnits): Block[] {
       ['Non-overloading motor per pump', motorText(c.motor, u, 'at the largest shaft power')],
       ['Duty-only motor per pump', motorText(c.dutyOnlyMotor, u, 'at the duty')],
       ...energyRows(c),
+      ...fitRows(c, u),
     ],
   });
   return blocks;

@@ -23,6 +23,7 @@ export {
   type JsonCaseResult,
   type JsonCheck,
   type JsonCurve,
+  type JsonCurveFit,
   type JsonCurves,
   type JsonEnvelope,
   type JsonMotor,

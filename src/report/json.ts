@@ -15,7 +15,7 @@ import type {
   UnitSystem,
 } from '../design/index';
 import { displayUnits } from '../design/index';
-import type { MotorRating } from '../pumps/index';
+import type { FitReport, MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
 import { convert, type Dimension, type Quantity, si, to, type UnitOf } from '../units/index';
 import { chosenUnits } from './format-values';
@@ -117,6 +117,22 @@ export interface JsonMotor {
   readonly serviceFactor: number | null;
 }
 
+/**
+ * How one catalogue curve was fitted: the method, the degree (null for the monotone cubic),
+ * `'default'` or `'given'`, the largest residual at a catalogue point (head in the head unit;
+ * efficiency as a fraction, so 0.005 is half a percentage point), the largest residual relative
+ * to the point's value, and whether the fit lies within the catalogue tolerance.
+ */
+export interface JsonCurveFit {
+  readonly method: FitReport['method'];
+  readonly degree: number | null;
+  readonly selection: FitReport['selection'];
+  readonly points: number;
+  readonly maxResidual: JsonQuantity | number | null;
+  readonly maxRelativeResidual: number | null;
+  readonly withinTolerance: boolean | null;
+}
+
 /** A candidate's evaluation. */
 export interface JsonCandidate {
   readonly name: string;
@@ -133,6 +149,8 @@ export interface JsonCandidate {
     readonly yearly: JsonQuantity | null;
     readonly cost: { readonly amount: number | null; readonly currency: string } | null;
   } | null;
+  /** Fits of the head curve and (when efficiency is given) of the efficiency curve. */
+  readonly curveFit: { readonly head: JsonCurveFit; readonly efficiency: JsonCurveFit | null };
   readonly checks: readonly JsonCheck[];
 }
 
@@ -279,6 +297,18 @@ function motor(m: MotorRating | undefined, u: DisplayUnits): JsonMotor | null {
   };
 }
 
+function curveFit(f: FitReport, maxResidual: JsonQuantity | number | null): JsonCurveFit {
+  return {
+    method: f.method,
+    degree: f.degree ?? null,
+    selection: f.selection,
+    points: f.points,
+    maxResidual,
+    maxRelativeResidual: round(f.maxRelativeResidual),
+    withinTolerance: f.withinTolerance ?? null,
+  };
+}
+
 function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
   const e = c.energy;
   const kWh = e === undefined ? null : round(e.kWh);
@@ -303,6 +333,13 @@ function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
                 ? null
                 : { amount: round(e.cost.amount), currency: e.cost.currency },
           },
+    curveFit: {
+      head: curveFit(c.curveFit.head, quantity(si<'length'>(c.curveFit.head.maxResidual), u.head)),
+      efficiency:
+        c.curveFit.efficiency === undefined
+          ? null
+          : curveFit(c.curveFit.efficiency, round(c.curveFit.efficiency.maxResidual)),
+    },
     checks: c.checks.map(check),
   };
 }
