@@ -4,6 +4,7 @@
  * @module
  */
 import { argumentError, checkFraction, checkPositive, HeadflowError } from '../errors';
+import { guardRange } from '../guards';
 import {
   annualEnergy,
   CATALOGUE_FIT_TOLERANCE,
@@ -53,6 +54,7 @@ export const DESIGN_DEFAULTS = {
   suctionVelocity: { min: 0.5, max: 1.5 },
   dischargeVelocity: { min: 1, max: 3 },
   nearBoilingRatio: 0.8,
+  dutyFlowTolerance: 0.02,
   hoursPerYear: 8760,
 } as const;
 
@@ -60,6 +62,8 @@ const NPSH_SOURCE =
   'ANSI/HI 9.6.1 (NPSH margin by application, as summarized in the pumps module; use the edition your project names)';
 const REGION_SOURCE = 'ANSI/HI 9.6.3 (preferred operating region 70-120 % of BEP flow by default)';
 const COMMON = 'common practice';
+const DUTY_TOLERANCE_SOURCE =
+  'limits.dutyFlowTolerance (default 2 %: system-curve uncertainty, common practice; within the flow tolerance of pump acceptance tests, ISO 9906 / ANSI/HI 14.6)';
 const SAMPLES = 61;
 
 /** Formats numbers for check messages in the report's units. */
@@ -90,6 +94,7 @@ interface Limits {
   readonly discharge: { readonly min: number; readonly max: number };
   readonly nearBoilingRatio: number;
   readonly designPressure: number | undefined;
+  readonly dutyFlowTolerance: number;
 }
 
 /** A candidate with its defaults filled in and its per-pump view of each system. */
@@ -160,6 +165,10 @@ function resolveLimits(input: DesignInput): Limits {
   checkFraction('limits.nearBoilingRatio', near);
   if (l.designPressure !== undefined)
     checkPositive('limits.designPressure', l.designPressure, 'Pa');
+  const dutyFlowTolerance =
+    l.dutyFlowTolerance === undefined
+      ? DESIGN_DEFAULTS.dutyFlowTolerance
+      : guardRange('limits.dutyFlowTolerance', l.dutyFlowTolerance, { min: 0, max: 1 });
   return {
     say: sayIn(input.units),
     npshMarginRatio: ratio,
@@ -172,6 +181,7 @@ function resolveLimits(input: DesignInput): Limits {
     ),
     nearBoilingRatio: near,
     designPressure: l.designPressure,
+    dutyFlowTolerance,
   };
 }
 
@@ -394,6 +404,57 @@ function dutyInCase(
   };
 }
 
+/** Shortfalls below this fraction of the duty flow are round-off of the operating point. */
+const FLOW_ROUND_OFF = 1e-9;
+
+/**
+ * The duty-flow check of a fixed-speed set: any shortfall is a note with its percentage, a
+ * shortfall beyond `limits.dutyFlowTolerance` an error; an excess beyond it a note (a valve or
+ * a trim would bring the flow down).
+ */
+function dutyFlowCheck(
+  duty: number,
+  flow: number,
+  candidate: string,
+  caseName: string,
+  limits: Limits,
+  checks: Check[],
+): void {
+  const tolerance = limits.dutyFlowTolerance;
+  const toleranceText = `${fmt(100 * tolerance, 3)} %`;
+  const short = (duty - flow) / duty;
+  const values = { flow, dutyFlow: duty, shortfall: Math.max(0, short), tolerance };
+  if (short > FLOW_ROUND_OFF) {
+    const beyond = short > tolerance;
+    checks.push(
+      check(
+        'duty-flow',
+        beyond ? 'error' : 'info',
+        candidate,
+        caseName,
+        `Delivers ${limits.say.flow(flow)}, ${fmt(100 * short, 3)} % short of the duty ${limits.say.flow(duty)}: ` +
+          (beyond
+            ? `more than the duty-flow tolerance of ${toleranceText}.`
+            : `within the duty-flow tolerance of ${toleranceText} (limits.dutyFlowTolerance).`),
+        values,
+        DUTY_TOLERANCE_SOURCE,
+      ),
+    );
+  } else if (-short > tolerance) {
+    checks.push(
+      check(
+        'duty-flow',
+        'info',
+        candidate,
+        caseName,
+        `Runs at ${limits.say.flow(flow)}, ${fmt(-100 * short, 3)} % above the duty ${limits.say.flow(duty)}: a valve would throttle it (or trim the impeller).`,
+        values,
+        COMMON,
+      ),
+    );
+  }
+}
+
 /** The operating region of a pump's share, from the pumps module's own region test. */
 function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   if (share?.inPreferredRegion === undefined || share.inAllowableRegion === undefined) {
@@ -471,22 +532,7 @@ function runCase(
   const share = pump.shares(q as Flow)[0];
   const percentOfBep = share?.percentOfBep;
   const region = regionOf(share);
-  if (c.control === 'fixed' && Math.abs(flow - input.dutyFlow) > 0.02 * input.dutyFlow) {
-    const short = flow < input.dutyFlow;
-    checks.push(
-      check(
-        'duty-flow',
-        short ? 'error' : 'info',
-        c.name,
-        s.name,
-        short
-          ? `Delivers ${limits.say.flow(flow)}, short of the duty ${limits.say.flow(input.dutyFlow)}.`
-          : `Runs at ${limits.say.flow(flow)}, above the duty ${limits.say.flow(input.dutyFlow)}: a valve would throttle it (or trim the impeller).`,
-        { flow, dutyFlow: input.dutyFlow },
-        COMMON,
-      ),
-    );
-  }
+  if (c.control === 'fixed') dutyFlowCheck(input.dutyFlow, flow, c.name, s.name, limits, checks);
   if (region === 'allowable') {
     checks.push(
       check(

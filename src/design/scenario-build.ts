@@ -147,6 +147,7 @@ function limits(
     ...(l.suctionVelocity === undefined ? {} : { suctionVelocity: l.suctionVelocity }),
     ...(l.dischargeVelocity === undefined ? {} : { dischargeVelocity: l.dischargeVelocity }),
     ...(l.nearBoilingRatio === undefined ? {} : { nearBoilingRatio: l.nearBoilingRatio }),
+    ...(l.dutyFlowTolerance === undefined ? {} : { dutyFlowTolerance: l.dutyFlowTolerance }),
   };
 }
 

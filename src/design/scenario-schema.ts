@@ -726,6 +726,7 @@ export const scenarioFields = {
         suctionVelocity: opt(velocityRange),
         dischargeVelocity: opt(velocityRange),
         nearBoilingRatio: opt(plainNumber('near-boiling ratio', 0, 1, true)),
+        dutyFlowTolerance: opt(fraction(true)),
       }),
       ['designPressure', 'designGaugePressure'],
       true,

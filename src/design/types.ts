@@ -80,6 +80,16 @@ export interface DesignLimits {
   readonly dischargeVelocity?: { readonly min: Velocity; readonly max: Velocity };
   /** Vapour pressure / suction surface pressure above which the fluid is "near boiling" (default 0.8). */
   readonly nearBoilingRatio?: number;
+  /**
+   * How far a fixed-speed set may fall short of the duty flow and still pass, as a fraction
+   * of the duty flow, 0 to 1 (default 0.02, that is 2 %). Any shortfall is reported as a note
+   * with its percentage; beyond this tolerance it is an error. The default allows for the
+   * uncertainty of the system curve (friction factors and fitting K values are known to a few
+   * per cent, and the flow of a friction-dominated system moves by about half the head error)
+   * and lies well inside the flow tolerance a pump's own acceptance test admits (ISO 9906 /
+   * ANSI/HI 14.6 grade 1B: +-5 % of flow; from memory). Set 0 to fail any shortfall.
+   */
+  readonly dutyFlowTolerance?: number;
 }
 
 /** Units a report is written in. */
