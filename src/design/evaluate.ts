@@ -274,7 +274,11 @@ function perPump(c: Candidate, system: SystemCurve): SystemCurveLike {
   };
 }
 
-/** NPSH available at a set flow in one case, or undefined where it cannot be known. */
+/**
+ * NPSH available at a set flow in one case, or undefined where it cannot be known. The suction
+ * end's velocity head counts when the end is a point in a pipe (`velocityDiameter`), as it
+ * does in the system curve: the suction line carries the set's whole flow.
+ */
 function npshAvailableAt(input: DesignInput, curve: SystemCurve, flow: number): Length | undefined {
   const location = input.pumpLocation;
   const fluid = curve.definition.fluid;
@@ -283,12 +287,16 @@ function npshAvailableAt(input: DesignInput, curve: SystemCurve, flow: number): 
   const details = curve.details(flow as Flow);
   let loss = 0;
   for (let i = 0; i < n; i++) loss += details.runs[i]?.totalLoss ?? 0;
+  const suction = curve.definition.suction;
+  const d = suction.velocityDiameter;
+  const velocity = d === undefined ? 0 : flow / ((Math.PI * d * d) / 4);
   return npshAvailable({
-    surfacePressure: curve.definition.suction.pressure,
+    surfacePressure: suction.pressure,
     vaporPressure: fluid.vaporPressure,
     density: fluid.density,
-    staticHeadAboveImpeller: (curve.definition.suction.elevation - location.elevation) as Length,
+    staticHeadAboveImpeller: (suction.elevation - location.elevation) as Length,
     suctionLoss: loss as Length,
+    suctionVelocity: velocity as Velocity,
     ...(curve.definition.g === undefined ? {} : { g: curve.definition.g }),
   });
 }

@@ -26,6 +26,7 @@ export {
 } from './motors';
 export {
   type NpshAvailableInput,
+  type NpshFromGaugeInput,
   type NpshMarginInput,
   type NpshMarginResult,
   npshAvailable,
