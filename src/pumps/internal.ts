@@ -155,12 +155,8 @@ export function defaultEfficiencyKernel(
 ): Kernel {
   const n = xs.filter((x) => x > 0).length;
   for (let degree = Math.min(3, n); degree <= Math.min(n, MAX_DEFAULT_DEGREE); degree++) {
-    let k: Kernel;
-    try {
-      k = fitKernel('efficiency', xs, ys, { method: 'polynomial', degree }, true, 'default');
-    } catch {
-      continue; // a rank-deficient degree: try the next
-    }
+    // Distinct flows and degree <= n: the least-squares problem always has full rank.
+    const k = fitKernel('efficiency', xs, ys, { method: 'polynomial', degree }, true, 'default');
     if (k.report.withinTolerance === true && oneHumpInRange(k, xMin, xMax)) return k;
   }
   return fitKernel('efficiency', xs, ys, { method: 'monotone' }, true, 'default');
