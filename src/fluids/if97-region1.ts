@@ -82,8 +82,8 @@ export function region1SpecificVolume(temperature: number, pressure: number): nu
  * the derivatives of the dimensionless Gibbs free energy, IF97 Table 3:
  * `c_p = -R tau^2 gamma_tautau` and
  * `w^2 = R T gamma_pi^2 / ((gamma_pi - tau gamma_pitau)^2 / (tau^2 gamma_tautau) - gamma_pipi)`.
- * Writes `[w, c_p, rho]` into `out` (rho = 1 / v in kg/m^3). Plain SI numbers, no checks, no
- * allocation.
+ * Writes `[w, c_p, rho]` into `out` (rho = 1 / v in kg/m^3, the same number as
+ * `1 / region1SpecificVolume`). Plain SI numbers, no checks, no allocation.
  * @internal
  */
 export function region1Acoustic(temperature: number, pressure: number, out: Float64Array): void {
@@ -101,8 +101,10 @@ export function region1Acoustic(temperature: number, pressure: number, out: Floa
     const ik = I[k] as number;
     const jk = J[k] as number;
     // n (7.1 - pi)^I (tau - 1.222)^J, then each derivative divides by (7.1 - pi) or (tau - 1.222).
-    const term = n * (ik === 0 ? 1 : (piPow[ik] as number) * u7) * (tauPow[jk - J_MIN] as number);
-    gPi -= (ik * term) / u7;
+    const tp = tauPow[jk - J_MIN] as number;
+    const term = n * (ik === 0 ? 1 : (piPow[ik] as number) * u7) * tp;
+    // gamma_pi summed exactly as region1SpecificVolume sums it, so the density is bit-identical
+    if (ik !== 0) gPi -= n * ik * (piPow[ik] as number) * tp;
     gPiPi += (ik * (ik - 1) * term) / (u7 * u7);
     gTauTau += (jk * (jk - 1) * term) / (t * t);
     gPiTau -= (ik * jk * term) / (u7 * t);
@@ -111,7 +113,7 @@ export function region1Acoustic(temperature: number, pressure: number, out: Floa
   const a = gPi - tau * gPiTau;
   out[0] = Math.sqrt((rt * gPi * gPi) / ((a * a) / (tau * tau * gTauTau) - gPiPi));
   out[1] = -IF97_R * tau * tau * gTauTau;
-  out[2] = pressure / (pi * gPi * rt);
+  out[2] = 1 / ((rt * gPi) / P_STAR);
 }
 
 /** Properties of region 1 from IF97 Table 3 (SI: m^3/kg, J/kg, J/(kg K), m/s). @internal */

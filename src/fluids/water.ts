@@ -14,11 +14,11 @@ import {
 } from '../units/index';
 import type { Fluid, FluidState } from './fluid';
 import { viscosityFromDensity, waterViscosityInto } from './iapws-2008-viscosity';
-import { region1Acoustic, region1SpecificVolume, waterDensityInto } from './if97-region1';
+import { region1Acoustic, waterDensityInto } from './if97-region1';
 import { saturationPressureSI, waterSaturationPressureInto } from './if97-region4';
 import { checkLiquidWater, WATER_P_MAX, WATER_T_MAX, WATER_T_MIN } from './water-range';
 
-/** Scratch for region1Acoustic: speed of sound, c_p, (density, unused here). */
+/** Scratch for region1Acoustic: speed of sound, c_p, density. */
 const scratch = new Float64Array(3);
 
 const WATER: Fluid = {
@@ -35,9 +35,9 @@ const WATER: Fluid = {
   hasVaporPressure: true,
   at(temperature: Temperature, pressure: Pressure = STANDARD_ATMOSPHERE): FluidState {
     checkLiquidWater(temperature, pressure);
-    const rho = 1 / region1SpecificVolume(temperature, pressure);
     region1Acoustic(temperature, pressure, scratch);
     const w = scratch[0] as number;
+    const rho = scratch[2] as number;
     const mu = viscosityFromDensity(temperature, rho);
     return {
       temperature,

@@ -103,6 +103,11 @@ describe('waveSpeed: special values and domain', () => {
       () => waveSpeed({ ...WATER, insideDiameter: q(0.2, 'm') }),
       'INVALID_ARGUMENT',
     );
+    const one = expectHeadflowError(
+      () => waveSpeed({ ...WATER, insideDiameter: q(0.2, 'm'), wallThickness: q(5, 'mm') }),
+      'INVALID_ARGUMENT',
+    );
+    expect(one.message).toContain('input.elasticModulus is missing');
     expectHeadflowError(() => waveSpeed({ ...WATER, restraintFactor: 0.9 }), 'INVALID_ARGUMENT');
     expectHeadflowError(() => waveSpeed({ ...WATER, wall: 'thick' }), 'INVALID_ARGUMENT');
   });
