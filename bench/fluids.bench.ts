@@ -3,6 +3,7 @@ import {
   waterDensity,
   waterDensityInto,
   waterSaturationPressure,
+  waterSpeedOfSound,
   waterViscosity,
 } from '../src/fluids';
 import { STANDARD_ATMOSPHERE, type Temperature } from '../src/units';
@@ -63,6 +64,14 @@ export const suites: readonly BenchSuite[] = [
         },
       },
       {
+        name: 'waterSpeedOfSound only (IF97 derivatives)',
+        run: () => {
+          let s = 0;
+          for (let i = 0; i < N; i++) s += waterSpeedOfSound((temps[i] ?? 0) as Temperature, P);
+          return s;
+        },
+      },
+      {
         name: 'waterDensityInto (array form)',
         run: () => {
           waterDensityInto(temps, P, out);
@@ -72,6 +81,7 @@ export const suites: readonly BenchSuite[] = [
     ],
     notes: () => [
       'One "Math.log x 10" call is ten Math.log evaluations; a ratio of 0.5 means one water state costs about twenty logarithms.',
+      'water().at(t) also computes the bulk modulus and c_p, in the same pass over the 34 IF97 terms as the density.',
     ],
   },
 ];

@@ -4,11 +4,13 @@
  * @module
  */
 import { argumentError, checkPositive } from '../errors';
+import { guardRange } from '../guards';
 import {
   type Density,
   type DynamicViscosity,
   type KinematicViscosity,
   type Pressure,
+  type SpecificHeat,
   STANDARD_ATMOSPHERE,
   type Temperature,
 } from '../units/index';
@@ -25,6 +27,10 @@ export interface ConstantFluidDefinition {
   readonly dynamicViscosity: DynamicViscosity;
   /** Vapour pressure (Pa, absolute), >= 0; leave out when unknown (no NPSH check possible). */
   readonly vaporPressure?: Pressure;
+  /** Bulk modulus of elasticity (Pa), > 0; leave out when unknown (no surge estimate). */
+  readonly bulkModulus?: Pressure;
+  /** Isobaric specific heat capacity (J/(kg K)), > 0; leave out when unknown. */
+  readonly specificHeat?: SpecificHeat;
 }
 
 /**
@@ -34,10 +40,11 @@ export interface ConstantFluidDefinition {
  * {@link tabulatedFluid} (the constant fluid cannot tell you that a value no longer holds).
  *
  * @param definition - name, density (kg/m^3), dynamic viscosity (Pa s), optional vapour
- *   pressure (Pa)
+ *   pressure (Pa), optional bulk modulus (Pa) and specific heat capacity (J/(kg K))
  * @returns a {@link Fluid}; its `validRange` is 0 K to Infinity (no temperature dependence)
  * @throws HeadflowError `INVALID_ARGUMENT` for an empty name, a non-positive or non-finite
- *   density or viscosity, or a negative vapour pressure.
+ *   density or viscosity, a negative vapour pressure, or a bulk modulus or specific heat that
+ *   is given but not a finite number > 0.
  * @example
  * ```ts
  * const oil = constantFluid({ name: 'light oil', density: q(870, 'kg/m3'), dynamicViscosity: q(30, 'cP') });
@@ -62,6 +69,21 @@ export function constantFluid(definition: ConstantFluidDefinition): Fluid {
       'Pa',
       'a finite absolute pressure >= 0 Pa',
     );
+  }
+  const extras: { bulkModulus?: Pressure; specificHeat?: SpecificHeat } = {};
+  if (definition.bulkModulus !== undefined) {
+    extras.bulkModulus = guardRange('bulkModulus', definition.bulkModulus, {
+      min: 0,
+      minOpen: true,
+      unit: 'Pa',
+    }) as Pressure;
+  }
+  if (definition.specificHeat !== undefined) {
+    extras.specificHeat = guardRange('specificHeat', definition.specificHeat, {
+      min: 0,
+      minOpen: true,
+      unit: 'J/(kg*K)',
+    }) as SpecificHeat;
   }
   const nu = (dynamicViscosity / density) as KinematicViscosity;
   const fill = (
@@ -92,6 +114,7 @@ export function constantFluid(definition: ConstantFluidDefinition): Fluid {
         density,
         dynamicViscosity,
         kinematicViscosity: nu,
+        ...extras,
       };
       return vaporPressure === undefined ? state : { ...state, vaporPressure };
     },

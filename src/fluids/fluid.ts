@@ -9,6 +9,7 @@ import type {
   DynamicViscosity,
   KinematicViscosity,
   Pressure,
+  SpecificHeat,
   Temperature,
 } from '../units/index';
 
@@ -26,6 +27,15 @@ export interface FluidState {
   readonly kinematicViscosity: KinematicViscosity;
   /** Vapour (saturation) pressure at the temperature (Pa, absolute), when the fluid has one. */
   readonly vaporPressure?: Pressure;
+  /**
+   * Bulk modulus of elasticity (Pa), the pressure rise per relative change of density,
+   * `K = rho dp/drho`, when the fluid has one. For water it is the isentropic modulus
+   * `rho w^2` from the IAPWS-IF97 speed of sound; a pressure surge travels at `sqrt(K/rho)`
+   * in a rigid pipe (see `waveSpeed`).
+   */
+  readonly bulkModulus?: Pressure;
+  /** Isobaric specific heat capacity (J/(kg K)), when the fluid has one (see `temperatureRise`). */
+  readonly specificHeat?: SpecificHeat;
 }
 
 /** Where a fluid's properties are defined. Outside it, `at()` throws `OUT_OF_RANGE`. */

@@ -77,6 +77,45 @@ export function region1SpecificVolume(temperature: number, pressure: number): nu
   return (IF97_R * temperature * gPi) / P_STAR;
 }
 
+/**
+ * Speed of sound w (m/s) and isobaric specific heat capacity c_p (J/(kg K)) of region 1 from
+ * the derivatives of the dimensionless Gibbs free energy, IF97 Table 3:
+ * `c_p = -R tau^2 gamma_tautau` and
+ * `w^2 = R T gamma_pi^2 / ((gamma_pi - tau gamma_pitau)^2 / (tau^2 gamma_tautau) - gamma_pipi)`.
+ * Writes `[w, c_p, rho]` into `out` (rho = 1 / v in kg/m^3, the same number as
+ * `1 / region1SpecificVolume`). Plain SI numbers, no checks, no allocation.
+ * @internal
+ */
+export function region1Acoustic(temperature: number, pressure: number, out: Float64Array): void {
+  const pi = pressure / P_STAR;
+  const tau = T_STAR / temperature;
+  fillPowers(pi, tau);
+  const u7 = 7.1 - pi;
+  const t = tau - 1.222;
+  let gPi = 0;
+  let gPiPi = 0;
+  let gTauTau = 0;
+  let gPiTau = 0;
+  for (let k = 0; k < TERMS; k++) {
+    const n = N[k] as number;
+    const ik = I[k] as number;
+    const jk = J[k] as number;
+    // n (7.1 - pi)^I (tau - 1.222)^J, then each derivative divides by (7.1 - pi) or (tau - 1.222).
+    const tp = tauPow[jk - J_MIN] as number;
+    const term = n * (ik === 0 ? 1 : (piPow[ik] as number) * u7) * tp;
+    // gamma_pi summed exactly as region1SpecificVolume sums it, so the density is bit-identical
+    if (ik !== 0) gPi -= n * ik * (piPow[ik] as number) * tp;
+    gPiPi += (ik * (ik - 1) * term) / (u7 * u7);
+    gTauTau += (jk * (jk - 1) * term) / (t * t);
+    gPiTau -= (ik * jk * term) / (u7 * t);
+  }
+  const rt = IF97_R * temperature;
+  const a = gPi - tau * gPiTau;
+  out[0] = Math.sqrt((rt * gPi * gPi) / ((a * a) / (tau * tau * gTauTau) - gPiPi));
+  out[1] = -IF97_R * tau * tau * gTauTau;
+  out[2] = 1 / ((rt * gPi) / P_STAR);
+}
+
 /** Properties of region 1 from IF97 Table 3 (SI: m^3/kg, J/kg, J/(kg K), m/s). @internal */
 export interface Region1Properties {
   readonly v: number;

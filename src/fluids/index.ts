@@ -20,3 +20,5 @@ export {
   tabulatedFluid,
 } from './tabulated-fluid';
 export { water } from './water';
+export { waterSpeedOfSound } from './water-sound-speed';
+export { waterSpecificHeat } from './water-specific-heat';

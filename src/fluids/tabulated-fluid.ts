@@ -10,6 +10,7 @@ import {
   type DynamicViscosity,
   type KinematicViscosity,
   type Pressure,
+  type SpecificHeat,
   STANDARD_ATMOSPHERE,
   type Temperature,
 } from '../units/index';
@@ -26,6 +27,10 @@ export interface FluidTableRow {
   readonly dynamicViscosity: DynamicViscosity;
   /** Vapour pressure (Pa, absolute), > 0; give it in every row or in none. */
   readonly vaporPressure?: Pressure;
+  /** Bulk modulus of elasticity (Pa), > 0; give it in every row or in none. */
+  readonly bulkModulus?: Pressure;
+  /** Isobaric specific heat capacity (J/(kg K)), > 0; give it in every row or in none. */
+  readonly specificHeat?: SpecificHeat;
 }
 
 /** Definition of a {@link tabulatedFluid}. */
@@ -52,7 +57,8 @@ function positive(value: unknown, parameter: string, unit: string): number {
  *
  * Between rows the properties are interpolated in temperature by the monotone piecewise cubic
  * of Steffen (1990) (the monotone cubic of src/numeric/interpolate.ts): density directly, viscosity and vapour
- * pressure through their logarithms (both vary roughly exponentially with temperature), so the
+ * pressure through their logarithms (both vary roughly exponentially with temperature), bulk
+ * modulus and specific heat capacity (optional columns) directly, so the
  * interpolant passes through every row, never overshoots between rows and keeps the trend of
  * the table. The table is taken as independent of pressure. Outside the table `at()` throws
  * `OUT_OF_RANGE`: headflow never extrapolates a table.
@@ -62,7 +68,7 @@ function positive(value: unknown, parameter: string, unit: string): number {
  * @returns a {@link Fluid} whose `validRange` is the table's temperature span
  * @throws HeadflowError `INVALID_ARGUMENT` for an empty name, fewer than two rows,
  *   temperatures that do not strictly increase, a non-positive or non-finite property, or a
- *   vapour pressure in some rows but not in others.
+ *   vapour pressure, bulk modulus or specific heat in some rows but not in others.
  * @example
  * ```ts
  * const brine = tabulatedFluid({
@@ -120,9 +126,13 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
     }
     if (withPv) lnPv[i] = Math.log(positive(row.vaporPressure, `rows[${i}].vaporPressure`, 'Pa'));
   }
+  const bulk = optionalColumn(rows, 'bulkModulus', 'Pa');
+  const heat = optionalColumn(rows, 'specificHeat', 'J/(kg*K)');
   const density = monotoneCubic(t, rho);
   const logViscosity = monotoneCubic(t, lnMu);
   const logVapor: MonotoneCubic | undefined = withPv ? monotoneCubic(t, lnPv) : undefined;
+  const bulkCurve = bulk === undefined ? undefined : monotoneCubic(t, bulk);
+  const heatCurve = heat === undefined ? undefined : monotoneCubic(t, heat);
   const tMin = t[0] as number;
   const tMax = t[n - 1] as number;
   const span = `${showTemperature(tMin)} to ${showTemperature(tMax)}`;
@@ -167,13 +177,17 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
       inTable(temperature, 'temperature');
       const r = rhoAt(temperature);
       const mu = muAt(temperature);
-      const state = {
+      const state: {
+        -readonly [K in keyof FluidState]: FluidState[K];
+      } = {
         temperature,
         pressure,
         density: r as Density,
         dynamicViscosity: mu as DynamicViscosity,
         kinematicViscosity: (mu / r) as KinematicViscosity,
       };
+      if (bulkCurve) state.bulkModulus = bulkCurve.evaluate(temperature) as Pressure;
+      if (heatCurve) state.specificHeat = heatCurve.evaluate(temperature) as SpecificHeat;
       return logVapor === undefined
         ? state
         : { ...state, vaporPressure: Math.exp(logVapor.evaluate(temperature)) as Pressure };
@@ -185,4 +199,31 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
       return fill(temperatures, out, (x) => Math.exp(logVapor.evaluate(x)));
     },
   };
+}
+
+/**
+ * Reads an optional column (`bulkModulus`, `specificHeat`) that must be given in every row or
+ * in none: undefined when absent from all rows, else the values (each finite and > 0).
+ */
+function optionalColumn(
+  rows: readonly FluidTableRow[],
+  key: 'bulkModulus' | 'specificHeat',
+  unit: string,
+): Float64Array | undefined {
+  const present = rows[0]?.[key] !== undefined;
+  const out = new Float64Array(rows.length);
+  for (let i = 0; i < rows.length; i++) {
+    const v = (rows[i] as FluidTableRow)[key];
+    if ((v !== undefined) !== present) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `rows[${i}].${key}`,
+        v,
+        unit,
+        `a value in every row or in none`,
+      );
+    }
+    if (present) out[i] = positive(v, `rows[${i}].${key}`, unit);
+  }
+  return present ? out : undefined;
 }

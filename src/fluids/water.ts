@@ -8,14 +8,18 @@ import {
   type DynamicViscosity,
   type KinematicViscosity,
   type Pressure,
+  type SpecificHeat,
   STANDARD_ATMOSPHERE,
   type Temperature,
 } from '../units/index';
 import type { Fluid, FluidState } from './fluid';
 import { viscosityFromDensity, waterViscosityInto } from './iapws-2008-viscosity';
-import { region1SpecificVolume, waterDensityInto } from './if97-region1';
+import { region1Acoustic, waterDensityInto } from './if97-region1';
 import { saturationPressureSI, waterSaturationPressureInto } from './if97-region4';
 import { checkLiquidWater, WATER_P_MAX, WATER_T_MAX, WATER_T_MIN } from './water-range';
+
+/** Scratch for region1Acoustic: speed of sound, c_p, density. */
+const scratch = new Float64Array(3);
 
 const WATER: Fluid = {
   name: 'water (IAPWS-IF97 region 1 and 4, IAPWS 2008 viscosity)',
@@ -31,7 +35,9 @@ const WATER: Fluid = {
   hasVaporPressure: true,
   at(temperature: Temperature, pressure: Pressure = STANDARD_ATMOSPHERE): FluidState {
     checkLiquidWater(temperature, pressure);
-    const rho = 1 / region1SpecificVolume(temperature, pressure);
+    region1Acoustic(temperature, pressure, scratch);
+    const w = scratch[0] as number;
+    const rho = scratch[2] as number;
     const mu = viscosityFromDensity(temperature, rho);
     return {
       temperature,
@@ -40,6 +46,8 @@ const WATER: Fluid = {
       dynamicViscosity: mu as DynamicViscosity,
       kinematicViscosity: (mu / rho) as KinematicViscosity,
       vaporPressure: saturationPressureSI(temperature) as Pressure,
+      bulkModulus: (rho * w * w) as Pressure,
+      specificHeat: scratch[1] as SpecificHeat,
     };
   },
   densityInto: (temperatures, out, pressure = STANDARD_ATMOSPHERE) =>
@@ -52,7 +60,9 @@ const WATER: Fluid = {
 /**
  * Liquid water, from the international formulations: density from IAPWS-IF97 region 1,
  * vapour pressure from IAPWS-IF97 region 4, viscosity from the IAPWS 2008 formulation (see
- * {@link waterDensity}, {@link waterSaturationPressure}, {@link waterViscosity}).
+ * {@link waterDensity}, {@link waterSaturationPressure}, {@link waterViscosity}); the
+ * (isentropic) bulk modulus `rho w^2` and the isobaric specific heat capacity from IF97
+ * region 1 too (see {@link waterSpeedOfSound}, {@link waterSpecificHeat}).
  *
  * `at(temperature, pressure)` takes an absolute pressure, by default the standard atmosphere
  * (101 325 Pa). States that are not liquid are refused with `OUT_OF_RANGE`: below 273.15 K
@@ -67,6 +77,8 @@ const WATER: Fluid = {
  * to(s.dynamicViscosity, 'mPa*s'); // 1.00160...
  * to(s.kinematicViscosity, 'cSt'); // 1.00341...
  * to(s.vaporPressure ?? q(0, 'Pa'), 'kPa'); // 2.3392...
+ * to(s.bulkModulus ?? q(0, 'Pa'), 'MPa'); // 2196.6... (rho w^2)
+ * to(s.specificHeat ?? q(0, 'J/(kg*K)'), 'kJ/(kg*K)'); // 4.1848...
  * water().at(q(100, 'degC')); // throws OUT_OF_RANGE: boils at 99.97 degC at 1 atm
  * ```
  */

@@ -12,6 +12,12 @@ export type { PvcSchedule } from './data/astm-d1785';
 export type { MaterialName } from './data/materials';
 export type { PipeDimensions } from './dimensions';
 export { flowArea } from './flow-area';
-export { type LengthRange, MATERIAL_NAMES, material, type PipeMaterial } from './materials';
+export {
+  type LengthRange,
+  MATERIAL_NAMES,
+  material,
+  type PipeMaterial,
+  type PressureRange,
+} from './materials';
 export { pipeSize, STEEL_PIPE_SIZES, STEEL_SCHEDULES, steelSchedules } from './pipe-size';
 export { PVC_PIPE_SIZES, pvcPipe } from './pvc-pipe';

@@ -4,7 +4,7 @@
  * @module
  */
 import { argumentError } from '../errors';
-import { type Length, UNITS } from '../units/index';
+import { type Length, type Pressure, UNITS } from '../units/index';
 import { MATERIALS, type MaterialName, type MaterialRow } from './data/materials';
 
 /** Feet in metres, exact (NIST SP 811, B.8). */
@@ -14,6 +14,12 @@ const METRES_PER_FOOT = UNITS.ft.factor;
 export interface LengthRange {
   readonly min: Length;
   readonly max: Length;
+}
+
+/** A pressure (stress) range, pascals. */
+export interface PressureRange {
+  readonly min: Pressure;
+  readonly max: Pressure;
 }
 
 /** A pipe wall material. */
@@ -32,6 +38,12 @@ export interface PipeMaterial {
   readonly hazenWilliamsC: number;
   /** Hazen-Williams C for pipe of uncertain age, where a source gives one. */
   readonly agedHazenWilliamsC?: number;
+  /** Young's modulus of elasticity of the wall (Pa), a typical value (see `waveSpeed`). */
+  readonly elasticModulus: Pressure;
+  /** Range of the modulus where the source prints one (Pa). */
+  readonly elasticModulusRange?: PressureRange;
+  /** Poisson's ratio of the wall (see `restraintFactor`). */
+  readonly poissonRatio: number;
   /** Where each figure comes from. */
   readonly sources: readonly string[];
 }
@@ -48,8 +60,16 @@ function build(row: MaterialRow): PipeMaterial {
     description: row.description,
     roughness: (row.roughness * k) as Length,
     hazenWilliamsC: row.hazenWilliamsC,
+    elasticModulus: (row.elasticModulusGPa * 1e9) as Pressure,
+    poissonRatio: row.poissonRatio,
     sources: Object.freeze([...row.sources]),
   };
+  if (row.elasticModulusRangeGPa) {
+    out.elasticModulusRange = Object.freeze({
+      min: (row.elasticModulusRangeGPa[0] * 1e9) as Pressure,
+      max: (row.elasticModulusRangeGPa[1] * 1e9) as Pressure,
+    });
+  }
   if (row.roughnessRange) {
     out.roughnessRange = Object.freeze({
       min: (row.roughnessRange[0] * k) as Length,
@@ -69,11 +89,13 @@ function build(row: MaterialRow): PipeMaterial {
 const BY_NAME = new Map<string, PipeMaterial>(MATERIALS.map((m) => [m.name, build(m)]));
 
 /**
- * Roughness and Hazen-Williams C of a pipe wall material. Each row cites its sources in
+ * Roughness, Hazen-Williams C, elastic modulus and Poisson's ratio of a pipe wall material
+ * (the last two for the pressure-wave speed, `waveSpeed`). Each row cites its sources in
  * `sources`: roughness of new pipe from Moody (1944, Fig. 1) except cement-lined ductile
  * iron; aged roughness ranges from the Colebrook-White roughness table (Normal to Poor
  * columns, 40 to 100 years of use); C from Fair, Geyer and Okun (Table 5.1) or the
- * reference tables named in the row.
+ * reference tables named in the row; elastic modulus and Poisson's ratio from Wylie and
+ * Streeter (1993, Table 2.1) or AWWA M41, recalled from memory (each row says so).
  *
  * These are typical values for design. Real pipe varies with manufacture, water quality and
  * age; measured values from the system in hand, and local codes, take precedence.
@@ -86,6 +108,8 @@ const BY_NAME = new Map<string, PipeMaterial>(MATERIALS.map((m) => [m.name, buil
  * const s = material('commercial-steel');
  * to(s.roughness, 'mm'); // 0.04572 (0.00015 ft)
  * s.hazenWilliamsC; // 140
+ * s.elasticModulus; // 207000000000 (Pa)
+ * s.poissonRatio; // 0.3
  * ```
  */
 export function material(name: MaterialName): PipeMaterial {

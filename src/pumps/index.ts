@@ -1,7 +1,8 @@
 /**
  * Pumps: curves from catalogue points, best efficiency point and operating regions, affinity
  * laws, operating point on a system, pumps in parallel and series, speed for a duty, NPSH,
- * specific speed, the power chain, motor sizing and yearly energy.
+ * specific speed, the power chain, motor sizing and yearly energy; the viscosity correction
+ * (ANSI/HI 9.6.7), the temperature rise at low flow and the intake submergence (ANSI/HI 9.8).
  *
  * @module pumps
  */
@@ -55,6 +56,8 @@ export {
   type SpeedForFlowResult,
   speedForFlow,
 } from './speed-for-flow';
+export { minimumSubmergence, type Submergence, type SubmergenceInput } from './submergence';
+export { temperatureRise } from './temperature-rise';
 export type {
   BestEfficiencyPoint,
   CataloguePoint,
@@ -67,3 +70,17 @@ export type {
   PumpShare,
   SystemCurveLike,
 } from './types';
+export {
+  correctForViscosity,
+  type ViscosityCorrection,
+  type ViscosityCorrectionOptions,
+} from './viscosity-correction';
+export {
+  VISCOSITY_B_MAX,
+  VISCOSITY_NU_MAX,
+  VISCOSITY_NU_WATER_LIKE,
+  type ViscosityFactors,
+  type ViscosityFactorsInput,
+  type ViscosityFactorsOptions,
+  viscosityCorrectionFactors,
+} from './viscosity-factors';

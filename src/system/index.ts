@@ -1,9 +1,18 @@
 /**
  * Systems: pipe runs with their fittings, valves and equipment, the energy balance between two
- * points, series and parallel composition, system curves and operating cases.
+ * points, series and parallel composition, system curves and operating cases; and the surge
+ * screening of a line (wave speed, Joukowsky, slow closure).
  *
  * @module system
  */
+export { type ClosureSurge, type ClosureSurgeInput, closureSurgeHead } from './closure-surge';
+export { joukowskyHead } from './joukowsky';
+export {
+  PIPE_ANCHORINGS,
+  type PipeAnchoring,
+  type RestraintFactorInput,
+  restraintFactor,
+} from './restraint-factor';
 export {
   type LossComponent,
   type PipeRun,
@@ -29,3 +38,4 @@ export {
   type SystemPoint,
   systemCurve,
 } from './system-curve';
+export { type WaveSpeedInput, waveSpeed } from './wave-speed';

@@ -170,6 +170,15 @@ export const UNITS = {
   MJ: unit('energy', 1e6, 'megajoule'),
   kWh: unit('energy', 3.6e6, 'kilowatt hour'),
   Btu: unit('energy', 1055.05585262, 'British thermal unit (International Table)'),
+  // specific heat capacity
+  'J/(kg*K)': unit('specificHeat', 1, 'joule per kilogram kelvin'),
+  'kJ/(kg*K)': unit('specificHeat', 1e3, 'kilojoule per kilogram kelvin'),
+  // SP 811 B.8: Btu_IT/(lb degF) = 4.1868 E+03 J/(kg K), exact (1055.05585262 / (lb x 5/9)).
+  'Btu/(lb*degF)': unit(
+    'specificHeat',
+    4186.8,
+    'Btu (International Table) per pound degree Fahrenheit',
+  ),
   // force
   N: unit('force', 1, 'newton'),
   kN: unit('force', 1e3, 'kilonewton'),

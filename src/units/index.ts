@@ -32,6 +32,7 @@ export type {
   Pressure,
   Quantity,
   RotationalSpeed,
+  SpecificHeat,
   Temperature,
   Time,
   Velocity,

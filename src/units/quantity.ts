@@ -21,6 +21,7 @@ export type Dimension =
   | 'temperature'
   | 'power'
   | 'energy'
+  | 'specificHeat'
   | 'force'
   | 'mass'
   | 'time'
@@ -62,6 +63,8 @@ export type Temperature = Quantity<'temperature'>;
 export type Power = Quantity<'power'>;
 /** Energy in joules. */
 export type Energy = Quantity<'energy'>;
+/** Specific heat capacity in joules per kilogram kelvin. */
+export type SpecificHeat = Quantity<'specificHeat'>;
 /** Force in newtons. */
 export type Force = Quantity<'force'>;
 /** Mass in kilograms. */

@@ -64,3 +64,27 @@ describe('material: the table', () => {
     expect(material('pvc')).toBe(material('pvc'));
   });
 });
+
+describe('elastic modulus and Poisson ratio (for the wave speed)', () => {
+  it('every material has E > 0 inside its printed range, 0 < Poisson <= 0.5, and a source line', () => {
+    for (const name of MATERIAL_NAMES) {
+      const m = material(name);
+      expect(m.elasticModulus, name).toBeGreaterThan(0);
+      if (m.elasticModulusRange) {
+        expect(m.elasticModulus, name).toBeGreaterThanOrEqual(m.elasticModulusRange.min);
+        expect(m.elasticModulus, name).toBeLessThanOrEqual(m.elasticModulusRange.max);
+      }
+      expect(m.poissonRatio, name).toBeGreaterThan(0);
+      expect(m.poissonRatio, name).toBeLessThanOrEqual(0.5);
+      expect(
+        m.sources.some((s) => s.startsWith("E and Poisson's ratio")),
+        name,
+      ).toBe(true);
+    }
+  });
+  it('steel: 207 GPa, 0.3 (doc example); plastics far softer than metals', () => {
+    expect(material('commercial-steel').elasticModulus).toBe(207e9);
+    expect(material('commercial-steel').poissonRatio).toBe(0.3);
+    expect(material('pvc').elasticModulus).toBeLessThan(material('copper').elasticModulus / 10);
+  });
+});

@@ -12,6 +12,8 @@ import {
   waterDensity,
   waterSaturationPressure,
   waterSaturationTemperature,
+  waterSpecificHeat,
+  waterSpeedOfSound,
 } from '../../src/fluids/index';
 import type { Pressure, Temperature } from '../../src/units';
 import { expectAbsolute } from '../helpers/expect';
@@ -48,6 +50,13 @@ describe('IAPWS-IF97 Table 5: region 1, Eq. (7)', () => {
       expectAbsolute(r.s / 1e3, s, halfUnit(s), `${at} s`);
       expectAbsolute(r.cp / 1e3, cp, halfUnit(cp), `${at} cp`);
       expectAbsolute(r.w, w, halfUnit(w), `${at} w`);
+    });
+    it(`T = ${t} K, p = ${p} MPa: public waterSpeedOfSound and waterSpecificHeat to the printed digits`, () => {
+      const at = `T=${t} K p=${p} MPa`;
+      const tk = t as Temperature;
+      const pa = (p * 1e6) as Pressure;
+      expectAbsolute(waterSpeedOfSound(tk, pa), w, halfUnit(w), `${at} w`);
+      expectAbsolute(waterSpecificHeat(tk, pa) / 1e3, cp, halfUnit(cp), `${at} cp`);
     });
     it(`T = ${t} K, p = ${p} MPa: public waterDensity is 1 / v to the printed digits`, () => {
       const rho = waterDensity(t as Temperature, (p * 1e6) as Pressure);

@@ -106,3 +106,11 @@ describe('parse/format round trip (fast-check)', () => {
     );
   });
 });
+
+describe('specific heat capacity units', () => {
+  it("parse with '*' or '·' and convert: 1 Btu/(lb degF) = 4.1868 kJ/(kg K) (NIST SP 811 B.8, exact)", () => {
+    expect(parseQuantity('4.18 kJ/(kg*K)', 'specificHeat')).toBeCloseTo(4180, 9);
+    expect(parseQuantity('1 Btu/(lb·degF)', 'specificHeat')).toBe(4186.8);
+    expectHeadflowError(() => parseQuantity('4.18 kJ/(kg*K)', 'energy'), 'WRONG_DIMENSION');
+  });
+});

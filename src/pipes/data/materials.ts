@@ -17,6 +17,10 @@
  *   conduit" (columns New / Uncertain).
  * - ETB-HW: Engineering ToolBox, "Hazen-Williams Coefficients" (table of C by material).
  * - LMNO-HW: LMNO Engineering, "Table of Hazen-Williams Coefficients".
+ * - WS-2.1: E. B. Wylie and V. L. Streeter, "Fluid Transients in Systems", Prentice Hall
+ *   1993, Table 2.1 (modulus of elasticity E and Poisson's ratio of pipe materials; the
+ *   figures are recalled from memory, not read from a copy in hand: check them against the
+ *   table or the manufacturer before a design relies on them).
  *
  * @module
  */
@@ -45,6 +49,12 @@ export interface MaterialRow {
   readonly agedRoughnessMm?: readonly [number, number];
   readonly hazenWilliamsC: number;
   readonly agedHazenWilliamsC?: number;
+  /** Young's modulus of elasticity of the wall, GPa (a typical value for design). */
+  readonly elasticModulusGPa: number;
+  /** Range of E in GPa where the source prints one. */
+  readonly elasticModulusRangeGPa?: readonly [number, number];
+  /** Poisson's ratio of the wall. */
+  readonly poissonRatio: number;
   readonly sources: readonly string[];
 }
 
@@ -57,10 +67,14 @@ export const MATERIALS: readonly MaterialRow[] = [
     agedRoughnessMm: [0.15, 0.3],
     hazenWilliamsC: 140,
     agedHazenWilliamsC: 100,
+    elasticModulusGPa: 207,
+    elasticModulusRangeGPa: [200, 212],
+    poissonRatio: 0.3,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'commercial steel or wrought iron' 0.00015 ft",
       "aged roughness: HRW-TABLE-5 'Rusty steel', Normal 0.15 mm to Poor 0.3 mm",
       "C: FGO-5.1 'Steel, welded joints, coated', New 140, Uncertain age 100",
+      "E and Poisson's ratio: WS-2.1 'Mild steel' E 200-212 GPa, Poisson 0.27-0.30 (from memory); 207 GPa (30 000 000 psi) is the common design value (common practice)",
     ],
   },
   {
@@ -70,10 +84,14 @@ export const MATERIALS: readonly MaterialRow[] = [
     roughness: 0.0005,
     agedRoughnessMm: [0.15, 0.3],
     hazenWilliamsC: 120,
+    elasticModulusGPa: 207,
+    elasticModulusRangeGPa: [200, 212],
+    poissonRatio: 0.3,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'galvanized iron' 0.0005 ft",
       "aged roughness: HRW-TABLE-5 'Galvanised iron, coated cast iron generally', Normal 0.15 mm to Poor 0.3 mm",
       "C: ETB-HW 'Galvanized iron' 120; LMNO-HW 'Galvanized iron' 120",
+      "E and Poisson's ratio: as commercial steel, WS-2.1 'Mild steel' (from memory); the zinc coat is too thin to matter",
     ],
   },
   {
@@ -84,10 +102,14 @@ export const MATERIALS: readonly MaterialRow[] = [
     agedRoughnessMm: [0.3, 0.6],
     hazenWilliamsC: 130,
     agedHazenWilliamsC: 100,
+    elasticModulusGPa: 100,
+    elasticModulusRangeGPa: [80, 170],
+    poissonRatio: 0.25,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'cast iron' 0.00085 ft",
       "aged roughness: HRW-TABLE-5 'Uncoated cast iron', Normal 0.3 mm to Poor 0.6 mm (tuberculated mains can be far rougher: same table, 'Old tuberculated water mains')",
       "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100; LMNO-HW 'Cast-Iron, New, unlined' 130",
+      "E and Poisson's ratio: WS-2.1 'Cast iron' E 80-170 GPa, Poisson 0.25 (from memory); 100 GPa is typical of grey iron (from memory)",
     ],
   },
   {
@@ -96,9 +118,12 @@ export const MATERIALS: readonly MaterialRow[] = [
     unit: 'mm',
     roughness: 0.03,
     hazenWilliamsC: 140,
+    elasticModulusGPa: 166,
+    poissonRatio: 0.28,
     sources: [
       "roughness: HRW-TABLE-5 'Spun bitumen or concrete lined', Normal 0.03 mm (the only column printed)",
       "C: ETB-HW 'Cast-Iron, cement lined' 140; AWWA M41 Ductile-Iron Pipe and Fittings gives C = 140 for cement-mortar lined pipe (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
+      "E and Poisson's ratio: ductile iron E = 24 000 000 psi (166 GPa), Poisson 0.28, as AWWA M41 gives them (from memory); the cement lining is not counted",
     ],
   },
   {
@@ -107,9 +132,13 @@ export const MATERIALS: readonly MaterialRow[] = [
     unit: 'ft',
     roughness: 0.000005,
     hazenWilliamsC: 130,
+    elasticModulusGPa: 117,
+    elasticModulusRangeGPa: [107, 131],
+    poissonRatio: 0.34,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft",
       "C: ETB-HW 'Copper' 130 - 140 and LMNO-HW 'Copper' 130-140; the table keeps the lower end (more head loss)",
+      "E and Poisson's ratio: WS-2.1 'Copper' E 107-131 GPa, Poisson 0.34 (from memory)",
     ],
   },
   {
@@ -118,9 +147,13 @@ export const MATERIALS: readonly MaterialRow[] = [
     unit: 'ft',
     roughness: 0.000005,
     hazenWilliamsC: 150,
+    elasticModulusGPa: 2.75,
+    elasticModulusRangeGPa: [2.4, 2.75],
+    poissonRatio: 0.45,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft, the class piping-designer lists as 'Drawn tubing (glass, brass, plastic)'",
       "C: ETB-HW 'Polyvinyl chloride, PVC, CPVC' 150 (FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe')",
+      "E and Poisson's ratio: WS-2.1 'PVC, rigid' E 2.4-2.75 GPa (from memory); Poisson 0.45 (from memory); the upper E is kept (a faster wave, a higher surge)",
     ],
   },
   {
@@ -129,9 +162,12 @@ export const MATERIALS: readonly MaterialRow[] = [
     unit: 'ft',
     roughness: 0.000005,
     hazenWilliamsC: 140,
+    elasticModulusGPa: 0.8,
+    poissonRatio: 0.46,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic, as for pvc)",
       "C: ETB-HW 'Polyethylene, PE, PEH' 140",
+      "E and Poisson's ratio: WS-2.1 'Polyethylene' E 0.8 GPa (from memory); Poisson 0.46 (from memory). PE is viscoelastic: its effective E falls with load time and temperature",
     ],
   },
   {
@@ -142,9 +178,13 @@ export const MATERIALS: readonly MaterialRow[] = [
     roughnessRange: [0.001, 0.01],
     hazenWilliamsC: 140,
     agedHazenWilliamsC: 130,
+    elasticModulusGPa: 30,
+    elasticModulusRangeGPa: [14, 30],
+    poissonRatio: 0.15,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'concrete' 0.001 to 0.01 ft; the table keeps the smooth end as the single value and gives the range",
       "C: FGO-5.1 'Concrete', New 140, Uncertain age 130",
+      "E and Poisson's ratio: WS-2.1 'Concrete' E 14-30 GPa, Poisson 0.1-0.15 (from memory); the upper E is kept (a faster wave, a higher surge)",
     ],
   },
 ];
