@@ -61,7 +61,11 @@ function why(e: HeadflowError, dimension: Dimension): string {
   }
   if (e.code === 'UNKNOWN_UNIT') {
     const known = unitsOf(dimension).join(', ');
-    return `: ${found(e.value)} is not a known unit (units of ${words(dimension)[0].replace(/^an? /, '')}: ${known})`;
+    const near = /(is ambiguous: did you mean [^?]+\?|Did you mean [^?]+\?)/.exec(e.message)?.[1];
+    const said = near?.startsWith('is ambiguous')
+      ? near.replace(/\?$/, '')
+      : `is not a known unit${near === undefined ? '' : `; ${near.charAt(0).toLowerCase()}${near.slice(1, -1)}`}`;
+    return `: ${found(e.value)} ${said} (units of ${words(dimension)[0].replace(/^an? /, '')}: ${known})`;
   }
   if (e.code === 'OUT_OF_RANGE') return ': below absolute zero';
   const hint = /\)\.\s+(.+?)\.?$/.exec(e.message)?.[1];
