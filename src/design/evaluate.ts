@@ -4,6 +4,7 @@
  * @module
  */
 import { argumentError, checkFraction, checkPositive, HeadflowError } from '../errors';
+import { guardRange } from '../guards';
 import {
   annualEnergy,
   motorForPump,
@@ -25,6 +26,7 @@ import {
   type Power,
   type Pressure,
   type RotationalSpeed,
+  STANDARD_ATMOSPHERE,
   STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
@@ -388,6 +390,8 @@ function dutyInCase(
     staticHead: d.staticHead,
     lossHead: d.lossHead,
     npshAvailable: npshAvailableAt(input, s.curve, input.dutyFlow),
+    suctionPressure: s.curve.definition.suction.pressure,
+    dischargePressure: s.curve.definition.discharge.pressure,
     runs: d.runs,
   };
 }
@@ -925,6 +929,14 @@ function curvesOf(
  */
 export function evaluateDesign(input: DesignInput): DesignReport {
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
+  const atmosphere =
+    input.atmosphere === undefined
+      ? STANDARD_ATMOSPHERE
+      : (guardRange('atmosphere', input.atmosphere, {
+          min: 0,
+          minOpen: true,
+          unit: 'Pa',
+        }) as Pressure);
   const limits = resolveLimits(input);
   checkLocation(input);
   const family = systemScenarios(
@@ -1006,6 +1018,7 @@ export function evaluateDesign(input: DesignInput): DesignReport {
     units: input.units ?? 'si',
     dutyFlow: input.dutyFlow,
     fluid: `${input.fluidName ?? 'liquid'} at ${fmt(input.system.fluid.temperature - 273.15, 4)} degC, ${fmt(input.system.fluid.density, 5)} kg/m3`,
+    atmosphere,
     duty,
     candidates: ranked,
     checks: systemChecks,

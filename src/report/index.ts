@@ -24,6 +24,7 @@ export {
   type JsonCheck,
   type JsonCurve,
   type JsonCurves,
+  type JsonEndPressure,
   type JsonEnvelope,
   type JsonMotor,
   type JsonOptions,

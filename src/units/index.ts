@@ -5,6 +5,7 @@
  * @module units
  */
 export { type PressureReference, UNIT_ALIASES, type UnitAlias } from './aliases';
+export { ATMOSPHERE_ELEVATION_RANGE, atmosphereAt } from './atmosphere';
 export {
   type DimensionOf,
   UNITS,
