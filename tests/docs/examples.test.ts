@@ -47,6 +47,21 @@ describe('examples run and print what their comments say', () => {
     // 144 in2/ft2 / 62.4 lb/ft3 = 2.3077 ft of water per psi (common practice: "2.31 ft/psi").
     expect(mod.feetPerPsi).toBeCloseTo(2.3077, 4);
   });
+  it('units guide: aliases, a gauge reading and the atmosphere at a site', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    const mod = (await import('../../docs/examples/guide-units-2')) as { vessel: number };
+    const lines = log.mock.calls.map((c) => c[0]);
+    log.mockRestore();
+    expect(lines).toEqual([
+      '272.5 m3/h',
+      [{ alias: 'RPM', unit: 'rpm' }],
+      '84.556 kPa',
+      'gauge',
+      '187.98 kPa',
+    ]);
+    // 15 psi = 103.421 kPa (NIST SP 811); 84.556 kPa at 1500 m (U.S. Standard Atmosphere 1976).
+    expect(mod.vessel).toBeCloseTo(103421.36 + 84556.0, 0);
+  });
   it('demo: evaluates the canal-lift scenario, prints the report and writes the chart', async () => {
     const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
     await import('../../docs/examples/demo');
