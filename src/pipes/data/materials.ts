@@ -4,19 +4,20 @@
  *
  * Sources (short names used in the rows):
  * - MOODY-1944: L. F. Moody, "Friction factors for pipe flow", Transactions of the ASME 66
- *   (1944) 671-684, Fig. 1 (roughness in feet for new, clean pipe). The same figures are
- *   reproduced by efunda ("Absolute Pipe Roughness", after Binder 1973) and piping-designer.
- * - HRW-TABLE-5: table "Colebrook-White roughness values", Table 5, columns Good (up to 20
- *   years of use) / Normal (40 to 50 years) / Poor (80 to 100 years), in mm, as reproduced
- *   in the document "Colebrook-White Roughness Values" (scribd 606782106). The table is the
- *   one of the HR Wallingford "Tables for the hydraulic design of pipes, sewers and channels"
- *   (attribution from memory).
+ *   (1944) 671-684, Fig. 1 (roughness in feet for new, clean pipe).
+ * - HRW-TABLE-5: HR Wallingford and D. I. H. Barr, "Tables for the hydraulic design of pipes,
+ *   sewers and channels" (Thomas Telford), the table of Colebrook-White roughness k_s by
+ *   pipe material, columns Good (up to 20 years of use) / Normal (40 to 50 years) / Poor (80
+ *   to 100 years), in mm. From memory: the values were read from a reproduction of the
+ *   table; the edition, page and table number of the book were not in hand.
  * - FGO-5.1: N. K. Shammas and L. K. Wang, "Fair, Geyer, and Okun's Water and Wastewater
  *   Engineering: Water Supply and Wastewater Removal", 3rd ed., Wiley 2011, Table 5.1
  *   "Values of the Hazen-Williams coefficient C for different conduit materials and age of
  *   conduit" (columns New / Uncertain).
- * - ETB-HW: Engineering ToolBox, "Hazen-Williams Coefficients" (table of C by material).
- * - LMNO-HW: LMNO Engineering, "Table of Hazen-Williams Coefficients".
+ * - NFPA-13: NFPA 13, "Standard for the Installation of Sprinkler Systems", the table of
+ *   Hazen-Williams C values for the pipe materials of sprinkler systems (from memory: the
+ *   edition and table number were not in hand).
+ * - AWWA-M41: AWWA Manual M41, "Ductile-Iron Pipe and Fittings" (from memory).
  *
  * @module
  */
@@ -73,7 +74,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'galvanized iron' 0.0005 ft",
       "aged roughness: HRW-TABLE-5 'Galvanised iron, coated cast iron generally', Normal 0.15 mm to Poor 0.3 mm",
-      "C: ETB-HW 'Galvanized iron' 120; LMNO-HW 'Galvanized iron' 120",
+      "C: NFPA-13 'Galvanized (all)' 120 (from memory); water-supply handbooks print the same 120 for galvanized iron (from memory)",
     ],
   },
   {
@@ -87,7 +88,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'cast iron' 0.00085 ft",
       "aged roughness: HRW-TABLE-5 'Uncoated cast iron', Normal 0.3 mm to Poor 0.6 mm (tuberculated mains can be far rougher: same table, 'Old tuberculated water mains')",
-      "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100; LMNO-HW 'Cast-Iron, New, unlined' 130",
+      "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100",
     ],
   },
   {
@@ -98,7 +99,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     hazenWilliamsC: 140,
     sources: [
       "roughness: HRW-TABLE-5 'Spun bitumen or concrete lined', Normal 0.03 mm (the only column printed)",
-      "C: ETB-HW 'Cast-Iron, cement lined' 140; AWWA M41 Ductile-Iron Pipe and Fittings gives C = 140 for cement-mortar lined pipe (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
+      "C: AWWA-M41 gives C = 140 for cement-mortar lined ductile iron (from memory); NFPA-13 'Cement-lined cast or ductile iron' 140 (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
     ],
   },
   {
@@ -109,7 +110,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     hazenWilliamsC: 130,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft",
-      "C: ETB-HW 'Copper' 130 - 140 and LMNO-HW 'Copper' 130-140; the table keeps the lower end (more head loss)",
+      'C: 130, from memory: water-supply tables print 130 to 140 for copper (with brass, lead and tin); the table keeps the lower end (more head loss). NFPA-13 allows 150 for copper tube in sprinkler systems (from memory)',
     ],
   },
   {
@@ -119,8 +120,8 @@ export const MATERIALS: readonly MaterialRow[] = [
     roughness: 0.000005,
     hazenWilliamsC: 150,
     sources: [
-      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft, the class piping-designer lists as 'Drawn tubing (glass, brass, plastic)'",
-      "C: ETB-HW 'Polyvinyl chloride, PVC, CPVC' 150 (FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe')",
+      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic is taken as drawn tubing; common practice)",
+      "C: NFPA-13 'Plastic (listed), all' 150 (from memory); FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe'",
     ],
   },
   {
@@ -131,7 +132,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     hazenWilliamsC: 140,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic, as for pvc)",
-      "C: ETB-HW 'Polyethylene, PE, PEH' 140",
+      "C: 140, from memory (the value water-supply practice commonly uses for PE pipe; FGO-5.1 prints 140 new for 'Cement-asbestos and plastic pipe')",
     ],
   },
   {
