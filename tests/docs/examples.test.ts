@@ -106,10 +106,31 @@ describe('README samples', () => {
     const lines = log.mock.calls.map((c) => String(c[0]));
     log.mockRestore();
     expect(lines).toEqual([
-      'duty head 30.43 m at 36 m3/h',
-      'runs at 41.51 m3/h',
+      'duty head 30.18 m at 36 m3/h',
+      'runs at 41.96 m3/h',
       'motor 7.5 kW, passed: true',
     ]);
+  });
+  it('the README and the demo put no threaded fitting on steel lines of NPS 3 and above', async () => {
+    // Common practice: threaded steel joints are for small bore (about NPS 2 and below);
+    // larger steel lines are flanged or welded, so their elbows are `elbow-90-flanged`.
+    const { fitting } = await import('../../src/losses');
+    const threaded = (id: string) => fitting(id).description.includes('threaded');
+    const demo = JSON.parse(read('docs/examples/canal-lift.json')) as {
+      line: { run?: { pipe?: { standard: string; size: string }; fittings?: { id: string }[] } }[];
+    };
+    let steelRuns = 0;
+    for (const { run } of demo.line) {
+      if (run?.pipe?.standard !== 'steel' || Number(run.pipe.size) < 3) continue;
+      steelRuns++;
+      for (const f of run.fittings ?? []) expect(threaded(f.id), f.id).toBe(false);
+    }
+    expect(steelRuns).toBeGreaterThan(0);
+    const sample = read('docs/examples/readme-node.ts');
+    expect(sample).toContain("pipeSize('3', '40')");
+    for (const [, id] of sample.matchAll(/id: '([\w-]+)'/g)) {
+      expect(threaded(id ?? ''), id).toBe(false);
+    }
   });
   it('the Deno sample is the file Deno runs (tests/deno/readme.deno.ts), after its import', () => {
     const block =
