@@ -10,6 +10,7 @@ interface PackageJson {
   readonly engines: { readonly node: string };
   readonly exports: Record<string, unknown>;
   readonly files: readonly string[];
+  readonly allowScripts?: Readonly<Record<string, boolean>>;
 }
 
 const pkg = JSON.parse(
@@ -40,5 +41,20 @@ describe('package.json', () => {
   it('re-exports every public module from the root barrel', () => {
     const root = readFileSync(new URL('../src/index.ts', import.meta.url), 'utf8');
     for (const m of publicModules) expect(root).toContain(`export * from './${m}/index';`);
+  });
+});
+
+describe('install scripts', () => {
+  it('every locked dependency with an install script is reviewed in allowScripts (npm 11 warns otherwise)', () => {
+    const lock = JSON.parse(
+      readFileSync(new URL('../package-lock.json', import.meta.url), 'utf8'),
+    ) as {
+      readonly packages: Readonly<Record<string, { readonly hasInstallScript?: boolean }>>;
+    };
+    const withScripts = Object.entries(lock.packages)
+      .filter(([, p]) => p.hasInstallScript === true)
+      .map(([path]) => path.slice(path.lastIndexOf('node_modules/') + 'node_modules/'.length));
+    expect(withScripts.length).toBeGreaterThan(0);
+    for (const name of withScripts) expect(pkg.allowScripts?.[name], name).toBeTypeOf('boolean');
   });
 });

@@ -101,6 +101,40 @@ function pick<T extends string>(
   );
 }
 
+/** The long options of the command, for "did you mean". */
+const LONG_OPTIONS = ['format', 'units', 'output', 'chart', 'help', 'version'] as const;
+
+/** Edit distance between two short words (insertions, deletions, substitutions). */
+function distance(a: string, b: string): number {
+  let row = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const next = [i];
+    for (let j = 1; j <= b.length; j++) {
+      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      next.push(Math.min((row[j] ?? 0) + 1, (next[j - 1] ?? 0) + 1, (row[j - 1] ?? 0) + cost));
+    }
+    row = next;
+  }
+  return row[b.length] ?? 0;
+}
+
+/** The message for arguments that parseArgs refused: the option named, and what was meant. */
+function argumentProblem(e: unknown): string {
+  const said = e instanceof Error ? e.message : String(e);
+  const code = (e as { code?: unknown } | null)?.code;
+  if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') {
+    const option = /'([^']+)'/.exec(said)?.[1] ?? 'given';
+    const word = option.replace(/^-+/, '').split('=')[0] ?? '';
+    const near = LONG_OPTIONS.filter(
+      (o) => word.length > 1 && (o.startsWith(word) || distance(word, o) <= 2),
+    );
+    const meant =
+      near.length === 0 ? '' : ` (did you mean ${near.map((o) => `--${o}`).join(' or ')}?)`;
+    return `unknown option ${option}${meant}.`;
+  }
+  return said.endsWith('.') ? said : `${said}.`;
+}
+
 function parse(argv: readonly string[]): Parsed {
   let values: Record<string, string | boolean | undefined>;
   let positionals: string[];
@@ -120,7 +154,7 @@ function parse(argv: readonly string[]): Parsed {
     }));
   } catch (e) {
     // node:util parseArgs throws a TypeError with an ERR_PARSE_ARGS_* code for bad arguments.
-    throw new InputError(e instanceof Error ? e.message : String(e));
+    throw new InputError(argumentProblem(e));
   }
   const text = (key: string): string | undefined => {
     const value = values[key];

@@ -28,6 +28,7 @@ import {
   type Power,
   type Pressure,
   type RotationalSpeed,
+  STANDARD_ATMOSPHERE,
   STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
@@ -408,6 +409,8 @@ function dutyInCase(
     staticHead: d.staticHead,
     lossHead: d.lossHead,
     npshAvailable: npshAvailableAt(input, s.curve, input.dutyFlow),
+    suctionPressure: s.curve.definition.suction.pressure,
+    dischargePressure: s.curve.definition.discharge.pressure,
     runs: d.runs,
   };
 }
@@ -1029,6 +1032,14 @@ function curvesOf(
  */
 export function evaluateDesign(input: DesignInput): DesignReport {
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
+  const atmosphere =
+    input.atmosphere === undefined
+      ? STANDARD_ATMOSPHERE
+      : (guardRange('atmosphere', input.atmosphere, {
+          min: 0,
+          minOpen: true,
+          unit: 'Pa',
+        }) as Pressure);
   const limits = resolveLimits(input);
   checkLocation(input);
   const family = systemScenarios(
@@ -1110,6 +1121,7 @@ export function evaluateDesign(input: DesignInput): DesignReport {
     units: input.units ?? 'si',
     dutyFlow: input.dutyFlow,
     fluid: `${input.fluidName ?? 'liquid'} at ${fmt(input.system.fluid.temperature - 273.15, 4)} degC, ${fmt(input.system.fluid.density, 5)} kg/m3`,
+    atmosphere,
     duty,
     candidates: ranked,
     checks: systemChecks,

@@ -14,7 +14,6 @@ export {
   SCENARIO_FORMAT,
   ScenarioFileError,
   type ScenarioIssue,
-  scenarioSchema,
 } from './scenario-file';
 export type {
   Arrangement,

@@ -1,11 +1,14 @@
 /**
  * Assembles the checked parts of a scenario file into a {@link DesignInput}: pressures made
- * absolute with the site's atmosphere, the fluid's state in each case, the operating cases,
+ * absolute with the site's atmosphere (given, or the standard atmosphere at the site's
+ * elevation), the fluid's state in each case, the operating cases,
  * and the checks that need more than one part (unique names, the suction line, the system
  * as a whole).
  *
  * @module
  */
+
+import { HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
 import {
@@ -16,13 +19,16 @@ import {
   systemCurve,
 } from '../system/index';
 import {
+  atmosphereAt,
+  formatQuantity,
   gaugeToAbsolute,
   type Pressure,
   STANDARD_ATMOSPHERE,
   type Temperature,
 } from '../units/index';
-import { type IssueSink, report, reportError } from './scenario-issues';
+import { fileMessage, found, type IssueSink, report, reportError } from './scenario-issues';
 import type { FileFluid, ScenarioParts } from './scenario-schema';
+import type { FilePressure } from './scenario-values';
 import type { DesignInput, DesignLimits } from './types';
 
 type Path = readonly (string | number)[];
@@ -49,25 +55,82 @@ function attempt<T>(
   }
 }
 
-/** The absolute pressure of an end, or undefined when it gives none. */
-function absolute(
-  sink: IssueSink,
-  e: { readonly pressure?: Pressure; readonly gaugePressure?: Pressure },
-  atmosphere: Pressure,
-  at: Path,
-): Pressure | undefined {
-  if (e.pressure !== undefined) return e.pressure;
-  if (e.gaugePressure === undefined) return undefined;
-  const gauge = e.gaugePressure;
-  return attempt(sink, [...at, 'gaugePressure'], () => gaugeToAbsolute(gauge, atmosphere));
+/** kPa for messages (the file's own unit is in its text). */
+function kPa(p: number): string {
+  return formatQuantity(p as Pressure, 'kPa', 5);
 }
 
-function endpoint(sink: IssueSink, e: FileEndpoint, atmosphere: Pressure, at: Path): Endpoint {
-  const pressure = absolute(sink, e, atmosphere, at) ?? atmosphere;
+/** How a pressure of the file was read: `read as absolute` / `read as gauge, 103.4 kPa absolute`. */
+function readAs(given: FilePressure, absolute: number | undefined): string {
+  if (given.reference === 'absolute') {
+    return given.marked
+      ? 'is absolute'
+      : 'is read as absolute (a unit without a mark is absolute here)';
+  }
+  const abs =
+    absolute === undefined ? '' : `, ${kPa(absolute)} absolute with the site's atmosphere`;
+  return `is read as gauge${abs}`;
+}
+
+/** What to write for a gauge reading: `"0 psig"` for `"0 psi"`. */
+function gaugeHint(given: FilePressure): string {
+  if (given.marked || given.reference === 'gauge') return '';
+  const m = /^(.*?)\s*(psi|bar|mbar|kPa|MPa)\s*$/.exec(given.text.trim());
+  const example = m === null ? '"0 psig", "0 barg" or "0 kPa(g)"' : `"${m[1]} ${m[2]}g"`;
+  return ` If it is a gauge reading, write it with a gauge unit (${example}) or give it as gaugePressure.`;
+}
+
+/** A pressure of an end as the file gives it: which field, what was written, and its value. */
+interface GivenPressure {
+  readonly field: 'pressure' | 'gaugePressure';
+  readonly given: FilePressure;
+  readonly absolute: Pressure;
+}
+
+/**
+ * The absolute pressure of an end, or undefined when it gives none (or gives one that cannot
+ * be: below a perfect vacuum, or zero, reported at its field).
+ */
+function absolute(
+  sink: IssueSink,
+  e: { readonly pressure?: FilePressure; readonly gaugePressure?: FilePressure },
+  atmosphere: Pressure,
+  at: Path,
+): GivenPressure | undefined {
+  const field = e.pressure !== undefined ? 'pressure' : 'gaugePressure';
+  const given = e[field];
+  if (given === undefined) return undefined;
+  const value =
+    given.reference === 'absolute'
+      ? (given.value as Pressure)
+      : attempt(sink, [...at, field], () => gaugeToAbsolute(given.value as Pressure, atmosphere));
+  if (value === undefined) return undefined;
+  if (value <= 0) {
+    report(
+      sink,
+      'INVALID_ARGUMENT',
+      `expected an absolute pressure above 0, found ${found(given.text)}, which ${readAs(given, value)}: a perfect vacuum, where no liquid stays liquid.${gaugeHint(given)}`,
+      [...at, field],
+    );
+    return undefined;
+  }
+  return { field, given, absolute: value };
+}
+
+function endpoint(
+  sink: IssueSink,
+  e: FileEndpoint,
+  atmosphere: Pressure,
+  at: Path,
+): { readonly end: Endpoint; readonly given: GivenPressure | undefined } {
+  const given = absolute(sink, e, atmosphere, at);
   return {
-    elevation: e.elevation,
-    pressure,
-    ...(e.velocityDiameter === undefined ? {} : { velocityDiameter: e.velocityDiameter }),
+    end: {
+      elevation: e.elevation,
+      pressure: given?.absolute ?? atmosphere,
+      ...(e.velocityDiameter === undefined ? {} : { velocityDiameter: e.velocityDiameter }),
+    },
+    given,
   };
 }
 
@@ -76,24 +139,53 @@ function partialEndpoint(
   e: PartialEndpoint,
   atmosphere: Pressure,
   at: Path,
-): Partial<Endpoint> {
-  const pressure = absolute(sink, e, atmosphere, at);
+): { readonly end: Partial<Endpoint>; readonly given: GivenPressure | undefined } {
+  const given = absolute(sink, e, atmosphere, at);
   return {
-    ...(e.elevation === undefined ? {} : { elevation: e.elevation }),
-    ...(pressure === undefined ? {} : { pressure }),
-    ...(e.velocityDiameter === undefined ? {} : { velocityDiameter: e.velocityDiameter }),
+    end: {
+      ...(e.elevation === undefined ? {} : { elevation: e.elevation }),
+      ...(given === undefined ? {} : { pressure: given.absolute }),
+      ...(e.velocityDiameter === undefined ? {} : { velocityDiameter: e.velocityDiameter }),
+    },
+    given,
   };
 }
 
-/** The fluid's state at a temperature and the suction pressure; issues at `at`. */
+/** The sentence of a fluid's message that speaks to code, not to a file's author. */
+const CODE_ADVICE =
+  /\s*Pressures are absolute: convert a gauge reading with gaugeToAbsolute\(\)\.?/;
+
+/**
+ * The fluid's state at a temperature and the suction pressure. A problem is reported at the
+ * suction pressure's field when the file gave one there (the likeliest mistake is a gauge
+ * reading written as absolute), else at the temperature `at`.
+ */
 function state(
   sink: IssueSink,
   fluid: FileFluid,
   temperature: Temperature,
   pressure: Pressure,
   at: Path,
+  suction: { readonly given: GivenPressure | undefined; readonly at: Path },
 ): FluidState | undefined {
-  return attempt(sink, at, () => fluid.fluid.at(temperature, pressure));
+  try {
+    return fluid.fluid.at(temperature, pressure);
+  } catch (e) {
+    if (!(e instanceof HeadflowError)) throw e;
+    const said = fileMessage(e).replace(CODE_ADVICE, '');
+    const g = suction.given;
+    if (g === undefined) {
+      report(sink, e.code, said, at);
+    } else {
+      report(
+        sink,
+        e.code,
+        `${said} This end's pressure ${found(g.given.text)} ${readAs(g.given, g.absolute)}.${gaugeHint(g.given)}`,
+        [...suction.at, g.field],
+      );
+    }
+    return undefined;
+  }
 }
 
 function friction(f: NonNullable<ScenarioParts['friction']>): FrictionFactorOptions {
@@ -127,13 +219,15 @@ function limits(
   l: NonNullable<ScenarioParts['limits']>,
   atmosphere: Pressure,
 ): DesignLimits {
-  const designPressure =
-    l.designPressure ??
-    (l.designGaugePressure === undefined
-      ? undefined
-      : attempt(sink, ['limits', 'designGaugePressure'], () =>
-          gaugeToAbsolute(l.designGaugePressure as Pressure, atmosphere),
-        ));
+  const designPressure = absolute(
+    sink,
+    {
+      ...(l.designPressure === undefined ? {} : { pressure: l.designPressure }),
+      ...(l.designGaugePressure === undefined ? {} : { gaugePressure: l.designGaugePressure }),
+    },
+    atmosphere,
+    ['limits'],
+  )?.absolute;
   for (const key of ['suctionVelocity', 'dischargeVelocity'] as const) {
     const range = l[key];
     if (range !== undefined && range.min > range.max) {
@@ -213,23 +307,29 @@ export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInp
       sink.addIssue(info);
     },
   };
-  const atmosphere = parts.atmosphere ?? STANDARD_ATMOSPHERE;
-  const suction = endpoint(counting, parts.suction, atmosphere, ['suction']);
-  const discharge = endpoint(counting, parts.discharge, atmosphere, ['discharge']);
+  const atmosphere = siteAtmosphere(counting, parts);
+  const { end: suction, given: suctionGiven } = endpoint(counting, parts.suction, atmosphere, [
+    'suction',
+  ]);
+  const { end: discharge } = endpoint(counting, parts.discharge, atmosphere, ['discharge']);
   const fluid = parts.fluid;
   const fluidAt = ['fluid', fluid.kind, 'temperature'];
-  const baseState = state(counting, fluid, fluid.temperature, suction.pressure, fluidAt);
+  const baseState = state(counting, fluid, fluid.temperature, suction.pressure, fluidAt, {
+    given: suctionGiven,
+    at: ['suction'],
+  });
 
   const cases: OperatingCase[] = [];
   (parts.cases ?? []).forEach((c, i) => {
-    const caseSuction =
+    const suctionRead =
       c.suction === undefined
         ? undefined
         : partialEndpoint(counting, c.suction, atmosphere, ['cases', i, 'suction']);
+    const caseSuction = suctionRead?.end;
     const caseDischarge =
       c.discharge === undefined
         ? undefined
-        : partialEndpoint(counting, c.discharge, atmosphere, ['cases', i, 'discharge']);
+        : partialEndpoint(counting, c.discharge, atmosphere, ['cases', i, 'discharge']).end;
     let caseFluid: FluidState | undefined;
     if (c.temperature !== undefined) {
       if (!fluid.variesWithTemperature) {
@@ -246,6 +346,9 @@ export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInp
           c.temperature,
           caseSuction?.pressure ?? suction.pressure,
           ['cases', i, 'temperature'],
+          suctionRead?.given === undefined
+            ? { given: undefined, at: [] }
+            : { given: suctionRead.given, at: ['cases', i, 'suction'] },
         );
       }
     }
@@ -290,5 +393,27 @@ export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInp
     ...(parts.energyPrice === undefined ? {} : { energyPrice: parts.energyPrice }),
     ...(designLimits === undefined ? {} : { limits: designLimits }),
     ...(parts.units === undefined ? {} : { units: parts.units }),
+    ...(parts.atmosphere === undefined && parts.site === undefined ? {} : { atmosphere }),
   };
+}
+
+/**
+ * The site's atmosphere: `atmosphere` as given, the standard atmosphere at `site.elevation`,
+ * or the standard atmosphere at sea level; both given is a problem at `site`.
+ */
+function siteAtmosphere(sink: IssueSink, parts: ScenarioParts): Pressure {
+  if (parts.atmosphere !== undefined && parts.site !== undefined) {
+    report(
+      sink,
+      'INVALID_ARGUMENT',
+      'give atmosphere (the pressure) or site (its elevation, for the standard atmosphere there), not both',
+      ['site'],
+    );
+  }
+  if (parts.atmosphere !== undefined) return parts.atmosphere;
+  const site = parts.site;
+  if (site === undefined) return STANDARD_ATMOSPHERE;
+  return (
+    attempt(sink, ['site', 'elevation'], () => atmosphereAt(site.elevation)) ?? STANDARD_ATMOSPHERE
+  );
 }

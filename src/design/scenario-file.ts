@@ -2,7 +2,8 @@
  * The scenario file: a JSON description of a whole design (fluid, the two ends of the system,
  * the line of pipe runs, operating cases, duty, candidate pumps, duty profile, energy price
  * and check limits), every quantity written with its unit. {@link readScenario} reads one
- * into a {@link DesignInput}; {@link scenarioSchema} is the valibot schema behind it.
+ * into a {@link DesignInput}. The valibot schema behind it stays inside the package: valibot is
+ * bundled into the build, and the published declarations name none of its types.
  *
  * @module
  */
@@ -17,8 +18,12 @@ export { SCENARIO_FORMAT };
 
 /**
  * The valibot schema of a scenario file (format `headflow-scenario/1`). Parsing a file with it
- * gives the {@link DesignInput}; its issues carry the path of each problem in the file. Most
- * callers want {@link readScenario}, which turns the issues into one {@link ScenarioFileError}.
+ * gives the {@link DesignInput}; its issues carry the path of each problem in the file.
+ * {@link readScenario} turns the issues into one {@link ScenarioFileError}. Internal: the
+ * package's public face is `readScenario` (its declarations must import nothing outside the
+ * package); docs/tools/scenario-schema.ts writes the JSON Schema from it.
+ *
+ * @internal
  */
 export const scenarioSchema = v.pipe(
   scenarioObject,

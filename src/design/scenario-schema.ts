@@ -44,6 +44,7 @@ import {
   flag,
   fraction,
   plainNumber,
+  pressure,
   quantity,
   text,
   viscosity,
@@ -523,9 +524,12 @@ const endpointFields = (partial: boolean) => ({
   elevation: partial
     ? opt(quantity('length', 'any', ELEVATION))
     : quantity('length', 'any', ELEVATION),
-  pressure: opt(quantity('pressure', 'nonNegative', 'absolute pressure on the surface')),
+  pressure: opt(pressure('absolute', 'pressure on the surface or at the point')),
   gaugePressure: opt(
-    quantity('pressure', 'any', 'gauge pressure on the surface (made absolute with atmosphere)'),
+    pressure(
+      'gauge',
+      'gauge pressure on the surface or at the point (made absolute with the atmosphere)',
+    ),
   ),
   velocityDiameter: opt(
     quantity(
@@ -536,7 +540,10 @@ const endpointFields = (partial: boolean) => ({
   ),
 });
 
-/** Where the liquid comes from or goes; `pressure` is absolute, `gaugePressure` is gauge. */
+/**
+ * Where the liquid comes from or goes. `pressure` reads a unit without a mark as absolute,
+ * `gaugePressure` as gauge; a marked unit (`psig`, `bara`) says which in either field.
+ */
 function endpoint<const P extends boolean>(partial: P) {
   return oneOf(
     obj(endpointFields(partial), 'an end of the system'),
@@ -679,8 +686,17 @@ export const scenarioFields = {
     quantity(
       'pressure',
       'positive',
-      'atmospheric pressure at the site (absolute), for gauge pressures and open surfaces; default 101325 Pa',
+      'atmospheric pressure at the site (absolute), for gauge pressures and open surfaces; default 101325 Pa, or the standard atmosphere at site.elevation',
     ),
+  ),
+  site: opt(
+    obj({
+      elevation: quantity(
+        'length',
+        'any',
+        'elevation of the site above mean sea level; the atmosphere is the standard atmosphere there (give this or atmosphere)',
+      ),
+    }),
   ),
   gravity: opt(quantity('acceleration', 'positive', 'gravity; default 9.80665 m/s2')),
   friction: opt(frictionSchema),
@@ -721,8 +737,10 @@ export const scenarioFields = {
       obj({
         npshMarginRatio: opt(plainNumber('NPSH margin ratio', 1)),
         npshMinimumMargin: opt(quantity('length', 'nonNegative')),
-        designPressure: opt(quantity('pressure', 'positive')),
-        designGaugePressure: opt(quantity('pressure', 'positive')),
+        designPressure: opt(pressure('absolute', 'design pressure of the discharge piping')),
+        designGaugePressure: opt(
+          pressure('gauge', 'design pressure of the discharge piping, as gauge'),
+        ),
         suctionVelocity: opt(velocityRange),
         dischargeVelocity: opt(velocityRange),
         nearBoilingRatio: opt(plainNumber('near-boiling ratio', 0, 1, true)),

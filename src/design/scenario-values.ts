@@ -10,6 +10,8 @@ import { HeadflowError } from '../errors';
 import {
   type Dimension,
   isUnit,
+  type PressureReference,
+  parsePressure,
   parseQuantity,
   type Quantity,
   UNITS,
@@ -61,9 +63,16 @@ function why(e: HeadflowError, dimension: Dimension): string {
   }
   if (e.code === 'UNKNOWN_UNIT') {
     const known = unitsOf(dimension).join(', ');
-    return `: ${found(e.value)} is not a known unit (units of ${words(dimension)[0].replace(/^an? /, '')}: ${known})`;
+    const near = /(is ambiguous: did you mean [^?]+\?|Did you mean [^?]+\?)/.exec(e.message)?.[1];
+    const said = near?.startsWith('is ambiguous')
+      ? near.replace(/\?$/, '')
+      : `is not a known unit${near === undefined ? '' : `; ${near.charAt(0).toLowerCase()}${near.slice(1, -1)}`}`;
+    return `: ${found(e.value)} ${said} (units of ${words(dimension)[0].replace(/^an? /, '')}: ${known})`;
   }
   if (e.code === 'OUT_OF_RANGE') return ': below absolute zero';
+  if (e.message.includes('is a gauge pressure unit')) {
+    return ': a gauge reading has no place here (this is an absolute pressure or a pressure difference); write it without the gauge mark, in psia, bara, kPa or psi';
+  }
   const hint = /\)\.\s+(.+?)\.?$/.exec(e.message)?.[1];
   return hint === undefined ? '' : `: ${hint.charAt(0).toLowerCase()}${hint.slice(1)}`;
 }
@@ -139,6 +148,52 @@ export function quantity<D extends Dimension>(
     v.rawTransform<unknown, Quantity<D>>((ctx) => {
       const r = readQuantity(ctx, [dimension], bound);
       return r === undefined ? ctx.NEVER : (r.value as Quantity<D>);
+    }),
+  );
+}
+
+/** A pressure as the file gives it: the number as written (Pa), gauge or absolute. */
+export interface FilePressure {
+  /** The value as written, in Pa: gauge or absolute as `reference` says. */
+  readonly value: number;
+  readonly reference: PressureReference;
+  /** True when the unit carried a gauge or absolute mark (`psig`, `bar(a)`). */
+  readonly marked: boolean;
+  /** The text as written, for messages. */
+  readonly text: string;
+}
+
+/**
+ * A pressure written as text, gauge or absolute: a unit with a mark (`"15 psig"`,
+ * `"2 bara"`, `"200 kPa(g)"`) says which; a unit without one is read as `unmarked`. Made
+ * absolute when the design is assembled, with the file's atmosphere.
+ */
+export function pressure(unmarked: PressureReference, meaning: string) {
+  const other = unmarked === 'absolute' ? 'gauge' : 'absolute';
+  const lead = `${meaning}; a unit without a mark is ${unmarked}, a marked one (psig, barg, kPa(g) or psia, bara, kPa(a)) may be ${other}`;
+  return v.pipe(
+    v.unknown(),
+    quantityMetadata(['pressure'], 'any', lead),
+    v.rawTransform<unknown, FilePressure>((ctx) => {
+      const input = ctx.dataset.value;
+      const wanted = `a pressure with its unit, such as "45 psi" (${unmarked}), "45 psig" or "3 bara"`;
+      if (typeof input !== 'string') {
+        const hint =
+          typeof input === 'number' ? ' (write a quantity as text: a number and its unit)' : '';
+        report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}${hint}`);
+        return ctx.NEVER;
+      }
+      try {
+        const r = parsePressure(input, { unmarked });
+        return { value: r.value, reference: r.reference, marked: r.marked, text: input };
+      } catch (e) {
+        if (!(e instanceof HeadflowError)) throw e;
+        const said = e.message.includes('perfect vacuum')
+          ? ': an absolute pressure is >= 0'
+          : why(e, 'pressure');
+        report(ctx, e.code, `expected ${wanted}, found ${found(input)}${said}`);
+        return ctx.NEVER;
+      }
     }),
   );
 }

@@ -119,6 +119,12 @@ export interface DesignInput {
   readonly limits?: DesignLimits;
   /** Units for the report's text (default `'si'`); the report's numbers are SI either way. */
   readonly units?: UnitSystem;
+  /**
+   * Atmospheric pressure at the site (absolute; default the standard atmosphere, 101 325 Pa;
+   * `atmosphereAt(elevation)` gives it for a site's elevation). The ends' pressures in
+   * `system` are absolute already: the report uses this to show each one as gauge too.
+   */
+  readonly atmosphere?: Pressure;
 }
 
 /** How serious a check's finding is. `error` fails the candidate (or the design). */
@@ -150,6 +156,10 @@ export interface CaseDuty {
   readonly lossHead: Length;
   /** NPSH available at the duty flow, when the pump location and a vapour pressure are known. */
   readonly npshAvailable: Length | undefined;
+  /** Absolute pressure at the suction end in this case (gauge: minus the report's `atmosphere`). */
+  readonly suctionPressure: Pressure;
+  /** Absolute pressure at the discharge end in this case. */
+  readonly dischargePressure: Pressure;
   /** Every run's figures at the duty flow. */
   readonly runs: readonly RunDetails[];
 }
@@ -256,6 +266,8 @@ export interface DesignReport {
   readonly dutyFlow: Flow;
   /** The liquid in the design case, in words: name, temperature, density. */
   readonly fluid: string;
+  /** Atmospheric pressure at the site (absolute), against which the ends' gauge pressures are shown. */
+  readonly atmosphere: Pressure;
   /** The duty in each operating case. */
   readonly duty: readonly CaseDuty[];
   /** Candidates, in rank order. */

@@ -23,38 +23,55 @@ const BAR = 1e5;
 const M3H = 1 / 3600;
 
 /**
- * Water density behind the Cv definition (kg/m^3): water at 60 degF (15.56 degC) and
- * 101.325 kPa, the reference of the liquid specific gravity in the ISA-75.01 sizing
- * equations (G = rho / rho of water at 60 degF). 999.02 is IAPWS-IF97 region 1 at that state
- * (999.016), rounded.
+ * Reference water density of both flow coefficients, Cv and Kv (kg/m^3): water at 15 degC and
+ * 101.325 kPa, 999.10 (IAPWS-IF97 region 1: 999.101, rounded).
+ *
+ * IEC 60534-2-1 (control-valve sizing equations) writes both coefficients with one relative
+ * density rho / rho0, rho0 being water at 15 degC, and its numerical constants N1 (for
+ * Q = N1 C sqrt(dp / (rho / rho0))) are 1e-1 for Kv (m^3/h, kPa), 8.65e-2 for Cv (m^3/h, kPa)
+ * and 1 for Cv (US gal/min, psi): from memory, the standard's Table 1 was not at hand. One
+ * reference density makes Kv and Cv a pure change of units,
+ * Kv / Cv = (1 gal/min in m^3/h) sqrt(1 bar / 1 psi) = {@link KV_PER_CV} = 0.864978, which the
+ * standard rounds to 0.865 (0.0865 / 0.1). ISA-75.01.01 refers Cv to water at 60 degF
+ * (999.02 kg/m^3), 8e-5 from this value, far inside the accuracy of a tested coefficient;
+ * valve handbooks often write 1000 kg/m^3 for Kv (P. Smith and R. W. Zappe, "Valve Selection
+ * Handbook", 5th ed., 2004, Eq. 2-14), 0.09 % away.
  */
-export const CV_WATER_DENSITY = 999.02;
+export const FLOW_COEFFICIENT_WATER_DENSITY = 999.1;
+
+/** The reference density of Cv: {@link FLOW_COEFFICIENT_WATER_DENSITY} (one for both). */
+export const CV_WATER_DENSITY = FLOW_COEFFICIENT_WATER_DENSITY;
+
+/** The reference density of Kv: {@link FLOW_COEFFICIENT_WATER_DENSITY} (one for both). */
+export const KV_WATER_DENSITY = FLOW_COEFFICIENT_WATER_DENSITY;
 
 /**
- * Water density behind the Kv definition (kg/m^3): 1000, the reference density of the Kv
- * equation as given by P. Smith and R. W. Zappe, "Valve Selection Handbook", 5th ed., 2004,
- * section "Flow coefficient Kv" (Eq. 2-14): m^3/h of water (5 degC to 40 degC) at 1 bar drop.
+ * Kv of a valve whose Cv is 1: `(1 US gal/min in m^3/h) x sqrt(1 bar / 1 psi)` = 0.864978
+ * (exact unit factors, NIST SP 811 B.8), so `Kv = 0.864978 Cv` and `Cv = 1.15610 Kv`. IEC
+ * 60534-2-1's constants give 0.865 (from memory, see {@link FLOW_COEFFICIENT_WATER_DENSITY}).
  */
-export const KV_WATER_DENSITY = 1000;
+export const KV_PER_CV = (GPM / M3H) * Math.sqrt(BAR / PSI);
 
 /**
  * `K D^-4 Cv^2`, the constant of {@link kFromCv} with D in metres:
- * `pi^2 psi / (8 rho_w gpm^2)` = 2.1391e9 m^-4 (890.36 with D in inches).
+ * `pi^2 psi / (8 rho_w gpm^2)` = 2.1389e9 m^-4 (890.29 with D in inches).
  */
 export const CV_CONSTANT = (Math.PI * Math.PI * PSI) / (8 * CV_WATER_DENSITY * GPM * GPM);
 
 /**
  * `K D^-4 Kv^2`, the constant of {@link kFromKv} with D in metres:
- * `pi^2 bar / (8 rho_w (m^3/h)^2)` = 1.59888e9 m^-4 (1.59888e-3 with D in millimetres).
+ * `pi^2 bar / (8 rho_w (m^3/h)^2)` = 1.60032e9 m^-4 (1.60032e-3 with D in millimetres).
  */
 export const KV_CONSTANT = (Math.PI * Math.PI * BAR) / (8 * KV_WATER_DENSITY * M3H * M3H);
 
 /**
  * Loss coefficient K of a valve or fitting of flow coefficient Cv in a pipe of inside
  * diameter D: `K = C D^4 / Cv^2` with `C = pi^2 (1 psi) / (8 rho_w (1 gal/min)^2)`, where
- * `rho_w` = {@link CV_WATER_DENSITY} (water at 60 degF). With D in inches, `C` = 890.36.
+ * `rho_w` = {@link FLOW_COEFFICIENT_WATER_DENSITY} (water at 15 degC, the reference of Kv
+ * too, so that {@link kFromKv} gives the same K for the same valve). With D in inches,
+ * `C` = 890.29.
  *
- * Cv is the flow of water at 60 degF in US gal/min that passes with a 1 psi pressure drop
+ * Cv is the flow of reference water in US gal/min that passes with a 1 psi pressure drop
  * (ISA-75.01 / IEC 60534 definition). Derivation: see the module source; it follows from
  * `dp = K rho V^2 / 2`, `V = Q / A`, `A = pi D^2 / 4` and the Cv definition
  * `Q = Cv sqrt(dp / G)` (gal/min, psi, G = rho / rho_w). K is referred to the velocity head
@@ -70,7 +87,7 @@ export const KV_CONSTANT = (Math.PI * Math.PI * BAR) / (8 * KV_WATER_DENSITY * M
  * @throws HeadflowError `INVALID_ARGUMENT` for Cv or diameter not finite and > 0.
  * @example
  * ```ts
- * kFromCv(100, q(2, 'in')); // 890.36 x 2^4 / 100^2 = 1.42458
+ * kFromCv(100, q(2, 'in')); // 890.29 x 2^4 / 100^2 = 1.42446
  * ```
  */
 export function kFromCv(cv: number, diameter: Length): number {
@@ -91,7 +108,7 @@ export function kFromCv(cv: number, diameter: Length): number {
  * @throws HeadflowError `INVALID_ARGUMENT` for K or diameter not finite and > 0.
  * @example
  * ```ts
- * cvFromK(1.42458, q(2, 'in')); // 100.0
+ * cvFromK(1.42446, q(2, 'in')); // 100.0
  * ```
  */
 export function cvFromK(k: number, diameter: Length): number {
@@ -103,14 +120,16 @@ export function cvFromK(k: number, diameter: Length): number {
 /**
  * Loss coefficient K of a valve or fitting of flow coefficient Kv in a pipe of inside
  * diameter D: `K = C D^4 / Kv^2` with `C = pi^2 (1 bar) / (8 rho_w (1 m^3/h)^2)`, where
- * `rho_w` = {@link KV_WATER_DENSITY} = 1000 kg/m^3. With D in millimetres, `C` = 1.59888e-3.
+ * `rho_w` = {@link FLOW_COEFFICIENT_WATER_DENSITY} (the same reference water as Cv, so that
+ * `kFromKv(KV_PER_CV x cv, D) = kFromCv(cv, D)`). With D in millimetres, `C` = 1.60032e-3.
  *
  * Kv is the flow of water in m^3/h that passes with a 1 bar pressure drop. Derivation as for
  * {@link kFromCv}, with the Kv definition `Q = Kv sqrt(dp / (rho / rho_w))` (m^3/h, bar).
  * Same validity (turbulent, not choked).
  *
- * Source: the Kv definition as given in P. Smith and R. W. Zappe, "Valve Selection
- * Handbook", 5th ed., 2004, Eq. 2-14; unit factors exact.
+ * Source: the Kv definition (m^3/h of water at 1 bar; P. Smith and R. W. Zappe, "Valve
+ * Selection Handbook", 5th ed., 2004, Eq. 2-14), with the reference density of IEC 60534-2-1
+ * (from memory: see {@link FLOW_COEFFICIENT_WATER_DENSITY}); unit factors exact.
  *
  * @param kv - flow coefficient Kv (m^3/h per sqrt(bar)), finite and > 0
  * @param diameter - inside diameter of the pipe K is referred to (m), finite and > 0
@@ -118,7 +137,7 @@ export function cvFromK(k: number, diameter: Length): number {
  * @throws HeadflowError `INVALID_ARGUMENT` for Kv or diameter not finite and > 0.
  * @example
  * ```ts
- * kFromKv(100, q(50, 'mm')); // 1.59888e-3 x 50^4 / 100^2 = 0.99930
+ * kFromKv(100, q(50, 'mm')); // 1.60032e-3 x 50^4 / 100^2 = 1.00020
  * ```
  */
 export function kFromKv(kv: number, diameter: Length): number {
@@ -139,7 +158,7 @@ export function kFromKv(kv: number, diameter: Length): number {
  * @throws HeadflowError `INVALID_ARGUMENT` for K or diameter not finite and > 0.
  * @example
  * ```ts
- * kvFromK(0.9993, q(50, 'mm')); // 100.0
+ * kvFromK(1.0002, q(50, 'mm')); // 100.0
  * ```
  */
 export function kvFromK(k: number, diameter: Length): number {

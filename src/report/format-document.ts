@@ -17,7 +17,7 @@ import type {
 } from '../design/index';
 import { displayUnits } from '../design/index';
 import type { FitReport, MotorRating } from '../pumps/index';
-import type { Length, Power } from '../units/index';
+import type { Length, Power, Pressure } from '../units/index';
 import {
   DASH,
   formatFixed,
@@ -104,6 +104,38 @@ function dutyTable(report: DesignReport, u: DisplayUnits): Block {
       formatIn(d.lossHead, u.head),
       formatIn(d.head, u.head),
       formatIn(d.npshAvailable, u.head),
+    ]),
+  };
+}
+
+/** `psia`/`psig` in US units, `kPa abs`/`kPa gauge` in SI: the reference in the column head. */
+function referenced(unit: string, reference: 'absolute' | 'gauge'): string {
+  if (unit === 'psi') return reference === 'absolute' ? 'psia' : 'psig';
+  return `${unit} ${reference === 'absolute' ? 'abs' : 'gauge'}`;
+}
+
+/**
+ * Each end's pressure in each case, absolute and gauge (against the report's atmosphere), so
+ * that a gauge reading entered as absolute (or the reverse) shows at a glance.
+ */
+function endsTable(report: DesignReport, u: DisplayUnits): Block {
+  const p = u.pressure;
+  const gauge = (x: number) => formatIn((x - report.atmosphere) as Pressure, p);
+  return {
+    kind: 'table',
+    columns: [
+      left('Case'),
+      right(`Suction\n(${referenced(p, 'absolute')})`),
+      right(`Suction\n(${referenced(p, 'gauge')})`),
+      right(`Discharge\n(${referenced(p, 'absolute')})`),
+      right(`Discharge\n(${referenced(p, 'gauge')})`),
+    ],
+    rows: report.duty.map((d) => [
+      d.case,
+      formatIn(d.suctionPressure, p),
+      gauge(d.suctionPressure),
+      formatIn(d.dischargePressure, p),
+      gauge(d.dischargePressure),
     ]),
   };
 }
@@ -277,7 +309,8 @@ function checkBlocks(checks: readonly Check[]): Block[] {
 }
 
 /**
- * The blocks of a printed report, in order: title and summary fields; duty per case; each
+ * The blocks of a printed report, in order: title and summary fields; duty per case; the
+ * ends' pressures per case, absolute and gauge; each
  * candidate (cases, motor, energy); ranking; checks by severity; cautions (always).
  */
 export function reportBlocks(report: DesignReport, system: UnitSystem): Block[] {
@@ -291,13 +324,20 @@ export function reportBlocks(report: DesignReport, system: UnitSystem): Block[] 
         ['Result', resultLine(report, checks)],
         ['Fluid', report.fluid],
         ['Duty flow', formatWithUnit(report.dutyFlow, u.flow)],
+        [
+          'Atmosphere',
+          `${formatIn(report.atmosphere, u.pressure)} ${referenced(u.pressure, 'absolute')}`,
+        ],
         ['Units', unitsLine(system, u)],
       ],
     },
     { kind: 'heading', text: 'Duty by operating case' },
   ];
-  if (report.duty.length > 0) blocks.push(dutyTable(report, u));
-  else blocks.push({ kind: 'paragraph', text: 'No operating case was evaluated.' });
+  if (report.duty.length > 0) {
+    blocks.push(dutyTable(report, u));
+    blocks.push({ kind: 'heading', text: 'End pressures by operating case' });
+    blocks.push(endsTable(report, u));
+  } else blocks.push({ kind: 'paragraph', text: 'No operating case was evaluated.' });
   if (report.candidates.length === 0) {
     blocks.push({
       kind: 'paragraph',

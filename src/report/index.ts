@@ -25,6 +25,7 @@ export {
   type JsonCurve,
   type JsonCurveFit,
   type JsonCurves,
+  type JsonEndPressure,
   type JsonEnvelope,
   type JsonMotor,
   type JsonOptions,

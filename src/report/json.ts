@@ -17,7 +17,15 @@ import type {
 import { displayUnits } from '../design/index';
 import type { FitReport, MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
-import { convert, type Dimension, type Quantity, si, to, type UnitOf } from '../units/index';
+import {
+  convert,
+  type Dimension,
+  type Pressure,
+  type Quantity,
+  si,
+  to,
+  type UnitOf,
+} from '../units/index';
 import { chosenUnits } from './format-values';
 
 /** The `format` tag of the envelope; the number changes when the shape changes incompatibly. */
@@ -86,7 +94,17 @@ export interface JsonCaseDuty {
   readonly staticHead: JsonQuantity | null;
   readonly lossHead: JsonQuantity | null;
   readonly npshAvailable: JsonQuantity | null;
+  /** Pressure at the suction end: absolute, and gauge against the report's atmosphere. */
+  readonly suctionPressure: JsonEndPressure;
+  /** Pressure at the discharge end: absolute and gauge. */
+  readonly dischargePressure: JsonEndPressure;
   readonly runs: readonly JsonRun[];
+}
+
+/** An end's pressure both ways, in the report's pressure unit. */
+export interface JsonEndPressure {
+  readonly absolute: JsonQuantity | null;
+  readonly gauge: JsonQuantity | null;
 }
 
 /** Where a candidate runs in one case; every figure is null when `failure` says why not. */
@@ -180,6 +198,8 @@ export interface JsonReport {
   readonly passed: boolean;
   readonly fluid: string;
   readonly dutyFlow: JsonQuantity | null;
+  /** Atmospheric pressure at the site (absolute), against which gauge pressures are given. */
+  readonly atmosphere: JsonQuantity | null;
   readonly duty: readonly JsonCaseDuty[];
   readonly candidates: readonly JsonCandidate[];
   readonly checks: readonly JsonCheck[];
@@ -252,13 +272,22 @@ function run(r: RunDetails, u: DisplayUnits): JsonRun {
   };
 }
 
-function duty(d: CaseDuty, u: DisplayUnits): JsonCaseDuty {
+function endPressure(p: Pressure, atmosphere: Pressure, u: DisplayUnits): JsonEndPressure {
+  return {
+    absolute: quantity(p, u.pressure),
+    gauge: quantity((p - atmosphere) as Pressure, u.pressure),
+  };
+}
+
+function duty(d: CaseDuty, atmosphere: Pressure, u: DisplayUnits): JsonCaseDuty {
   return {
     case: d.case,
     head: quantity(d.head, u.head),
     staticHead: quantity(d.staticHead, u.head),
     lossHead: quantity(d.lossHead, u.head),
     npshAvailable: quantity(d.npshAvailable, u.head),
+    suctionPressure: endPressure(d.suctionPressure, atmosphere, u),
+    dischargePressure: endPressure(d.dischargePressure, atmosphere, u),
     runs: d.runs.map((r) => run(r, u)),
   };
 }
@@ -393,7 +422,8 @@ export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnv
       passed: report.passed,
       fluid: report.fluid,
       dutyFlow: quantity(report.dutyFlow, u.flow),
-      duty: report.duty.map((d) => duty(d, u)),
+      atmosphere: quantity(report.atmosphere, u.pressure),
+      duty: report.duty.map((d) => duty(d, report.atmosphere, u)),
       candidates: report.candidates.map((c) => candidate(c, u)),
       checks: report.checks.map(check),
       cautions: [...report.cautions],

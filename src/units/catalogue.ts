@@ -56,6 +56,10 @@ function unit<D extends Dimension>(
  * Every unit headflow understands, by symbol. Symbols are ASCII: `m3/h`, `Pa*s`, `degC`.
  * `gal` is the US gallon, `hp` the mechanical horsepower (550 ft lbf/s), `lb` the
  * pound-mass, `Btu` the International Table Btu, `psi` pound-force per square inch.
+ * The litre (1 L = 1e-3 m^3), the hour (3600 s), the day (86 400 s) and the kilowatt hour
+ * (3.6e6 J) are exact in NIST SP 811 Appendix B.8; `ML/d`, `m3/d`, `L/h`, `MWh` and `GJ`
+ * are built from them with SI prefixes (SP 811 section 4). Text may also use the spellings
+ * engineers write (`gpm`, `m3/hr`, `feet`, `deg F` ...): see `aliasesOf`.
  */
 export const UNITS = {
   // length
@@ -91,6 +95,9 @@ export const UNITS = {
   'ft3/s': unit('flow', CUBIC_FOOT, 'cubic foot per second'),
   'ft3/min': unit('flow', CUBIC_FOOT / MINUTE, 'cubic foot per minute'),
   'Mgal/d': unit('flow', (1e6 * US_GALLON) / DAY, 'million US gallons per day'),
+  'm3/d': unit('flow', 1 / DAY, 'cubic metre per day'),
+  'ML/d': unit('flow', (1e6 * 1e-3) / DAY, 'megalitre per day'),
+  'L/h': unit('flow', 1e-3 / HOUR, 'litre per hour'),
   // mass flow
   'kg/s': unit('massFlow', 1, 'kilogram per second'),
   'kg/h': unit('massFlow', 1 / HOUR, 'kilogram per hour'),
@@ -168,7 +175,9 @@ export const UNITS = {
   J: unit('energy', 1, 'joule'),
   kJ: unit('energy', 1e3, 'kilojoule'),
   MJ: unit('energy', 1e6, 'megajoule'),
+  GJ: unit('energy', 1e9, 'gigajoule'),
   kWh: unit('energy', 3.6e6, 'kilowatt hour'),
+  MWh: unit('energy', 3.6e9, 'megawatt hour'),
   Btu: unit('energy', 1055.05585262, 'British thermal unit (International Table)'),
   // specific heat capacity
   'J/(kg*K)': unit('specificHeat', 1, 'joule per kilogram kelvin'),

@@ -1,4 +1,6 @@
 import { argumentError, checkFinite, HeadflowError } from '../errors';
+import { guardString } from '../guards';
+import { aliasesOfDimension, aliasTarget, markedPressure, refusedUnit } from './aliases';
 import {
   type DimensionOf,
   UNITS,
@@ -20,15 +22,50 @@ export function isUnit(symbol: unknown): symbol is UnitSymbol {
  * @internal
  */
 export function unitDefinition(symbol: unknown, parameter = 'unit'): UnitDefinition {
-  if (!isUnit(symbol)) {
+  if (!isUnit(symbol)) throw unknownUnit(symbol, parameter);
+  return UNITS[symbol];
+}
+
+/** The `UNKNOWN_UNIT` error for a symbol, with "did you mean" where a unit is near. */
+function unknownUnit(symbol: unknown, parameter: string): HeadflowError {
+  const text = typeof symbol === 'string' ? symbol.slice(0, 60) : undefined;
+  const alias = text === undefined ? undefined : aliasTarget(text.trim());
+  const said =
+    text === undefined
+      ? 'is not a known unit.'
+      : alias !== undefined
+        ? `is not a unit symbol: it is an alias of ${alias}, read from text only; write ${alias} here.`
+        : refusedUnit(text);
+  return new HeadflowError(
+    'UNKNOWN_UNIT',
+    `${parameter} ${text === undefined ? String(symbol) : JSON.stringify(text)} ${said} ` +
+      'Units are ASCII symbols such as m, ft, gal/min, m3/h, psi, kPa, degC (see unitsOf() and aliasesOf()).',
+    { parameter, value: symbol, allowed: 'a unit symbol from the catalogue' },
+  );
+}
+
+/**
+ * The catalogue symbol that a unit written in text stands for: a symbol, an alias
+ * (`gpm`, `feet`, `deg F`), or an absolute-marked pressure unit (`psia`, `bar(a)`, since
+ * `Pressure` is absolute). Gauge-marked units (`psig`) are refused here: they need an
+ * atmosphere (see `parsePressure`). @internal
+ */
+export function resolveUnit(text: string, parameter = 'unit'): UnitSymbol {
+  const s = text.trim();
+  if (isUnit(s)) return s;
+  const alias = aliasTarget(s);
+  if (alias !== undefined) return alias;
+  const marked = markedPressure(s);
+  if (marked?.reference === 'absolute') return marked.symbol;
+  if (marked?.reference === 'gauge') {
     throw new HeadflowError(
-      'UNKNOWN_UNIT',
-      `${parameter} ${typeof symbol === 'string' ? JSON.stringify(symbol) : String(symbol)} is not a known unit. ` +
-        'Units are ASCII symbols such as m, ft, gal/min, m3/h, psi, kPa, degC (see unitsOf()).',
-      { parameter, value: symbol, allowed: 'a unit symbol from the catalogue' },
+      'INVALID_ARGUMENT',
+      `${parameter} ${JSON.stringify(s)} is a gauge pressure unit: a gauge reading needs the atmosphere it is referred to. ` +
+        'Read it with parsePressure(text) and make it absolute with gaugeToAbsolute(value, atmosphere).',
+      { parameter, value: s, allowed: 'an absolute or unmarked pressure unit' },
     );
   }
-  return UNITS[symbol];
+  throw unknownUnit(s, parameter);
 }
 
 /** Converts a value in a unit to SI, refusing impossible temperatures. */
@@ -91,10 +128,12 @@ export function to<D extends Dimension>(quantity: Quantity<D>, unit: UnitOf<D>):
 
 /**
  * Converts a number between two units of the same dimension, checking the dimension at run
- * time (for values that come from files, forms or untyped code).
+ * time (for values that come from files, forms or untyped code). Either unit may be an alias
+ * (`gpm`, `feet`: see {@link aliasesOf}) or an absolute-marked pressure unit (`psia`).
  *
- * @throws HeadflowError `UNKNOWN_UNIT`, `WRONG_DIMENSION` when the units differ in dimension,
- *   `INVALID_ARGUMENT` for NaN or infinite values, `OUT_OF_RANGE` below absolute zero.
+ * @throws HeadflowError `UNKNOWN_UNIT` (with "did you mean" for a near or ambiguous
+ *   spelling), `WRONG_DIMENSION` when the units differ in dimension, `INVALID_ARGUMENT` for
+ *   NaN or infinite values or a gauge-marked unit (`psig`), `OUT_OF_RANGE` below absolute zero.
  * @example
  * ```ts
  * convert(45, 'psi', 'kPa'); // 310.2640781925763
@@ -102,8 +141,8 @@ export function to<D extends Dimension>(quantity: Quantity<D>, unit: UnitOf<D>):
  * ```
  */
 export function convert(value: number, from: string, into: string): number {
-  const a = unitDefinition(from, 'from');
-  const b = unitDefinition(into, 'into');
+  const a = UNITS[resolveUnit(guardString('from', from), 'from')];
+  const b = UNITS[resolveUnit(guardString('into', into), 'into')];
   if (a.dimension !== b.dimension) {
     throw new HeadflowError(
       'WRONG_DIMENSION',
@@ -138,6 +177,27 @@ export function unitsOf<D extends Dimension>(dimension: D): readonly UnitOf<D>[]
     );
   }
   return list;
+}
+
+/**
+ * The other spellings of a dimension's units that text may use (files, `parseQuantity`,
+ * `convert`), each with the catalogue symbol it stands for: `gpm` for `gal/min`, `feet` for
+ * `ft`, `deg F` for `degF` ... (`q` and `to` take the symbols of {@link unitsOf}.)
+ *
+ * @param dimension - a dimension, for example `'flow'`
+ * @returns pairs `{ alias, unit }` in catalogue order of the units; empty for a dimension
+ *   without aliases
+ * @throws HeadflowError `INVALID_ARGUMENT` for a name that is not a dimension.
+ * @example
+ * ```ts
+ * aliasesOf('rotationalSpeed'); // [{ alias: 'RPM', unit: 'rpm' }]
+ * ```
+ */
+export function aliasesOf<D extends Dimension>(
+  dimension: D,
+): readonly { readonly alias: string; readonly unit: UnitOf<D> }[] {
+  unitsOf(dimension);
+  return aliasesOfDimension(dimension);
 }
 
 /** Every dimension, in catalogue order. */

@@ -4,6 +4,8 @@
  *
  * @module units
  */
+export { type PressureReference, UNIT_ALIASES, type UnitAlias } from './aliases';
+export { ATMOSPHERE_ELEVATION_RANGE, atmosphereAt } from './atmosphere';
 export {
   type DimensionOf,
   UNITS,
@@ -12,8 +14,14 @@ export {
   type UnitSymbol,
 } from './catalogue';
 export { STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from './constants';
-export { convert, DIMENSIONS, isUnit, q, to, unitsOf } from './convert';
-export { formatQuantity, parseQuantity } from './parse';
+export { aliasesOf, convert, DIMENSIONS, isUnit, q, to, unitsOf } from './convert';
+export {
+  formatQuantity,
+  type ParsePressureOptions,
+  type PressureReading,
+  parsePressure,
+  parseQuantity,
+} from './parse';
 export { absoluteToGauge, gaugeToAbsolute, headFromPressure, pressureFromHead } from './pressure';
 export type {
   Acceleration,

@@ -104,7 +104,7 @@ describe('readScenario: the example file', () => {
     expect(main?.agedRoughness).toBeCloseTo(0.0005, 15);
     expect(main?.elevationChange).toBe(38);
     expect(main?.fittings).toEqual([
-      { id: 'elbow-90-standard', count: 6 },
+      { id: 'elbow-90-flanged', count: 6 },
       { id: 'gate-valve-open' },
       { id: 'swing-check-valve' },
       { id: 'exit' },

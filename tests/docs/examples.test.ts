@@ -47,6 +47,21 @@ describe('examples run and print what their comments say', () => {
     // 144 in2/ft2 / 62.4 lb/ft3 = 2.3077 ft of water per psi (common practice: "2.31 ft/psi").
     expect(mod.feetPerPsi).toBeCloseTo(2.3077, 4);
   });
+  it('units guide: aliases, a gauge reading and the atmosphere at a site', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    const mod = (await import('../../docs/examples/guide-units-2')) as { vessel: number };
+    const lines = log.mock.calls.map((c) => c[0]);
+    log.mockRestore();
+    expect(lines).toEqual([
+      '272.5 m3/h',
+      [{ alias: 'RPM', unit: 'rpm' }],
+      '84.556 kPa',
+      'gauge',
+      '187.98 kPa',
+    ]);
+    // 15 psi = 103.421 kPa (NIST SP 811); 84.556 kPa at 1500 m (U.S. Standard Atmosphere 1976).
+    expect(mod.vessel).toBeCloseTo(103421.36 + 84556.0, 0);
+  });
   it('demo: evaluates the canal-lift scenario, prints the report and writes the chart', async () => {
     const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
     await import('../../docs/examples/demo');
@@ -91,10 +106,31 @@ describe('README samples', () => {
     const lines = log.mock.calls.map((c) => String(c[0]));
     log.mockRestore();
     expect(lines).toEqual([
-      'duty head 30.43 m at 36 m3/h',
-      'runs at 41.51 m3/h',
+      'duty head 30.18 m at 36 m3/h',
+      'runs at 41.96 m3/h',
       'motor 7.5 kW, passed: true',
     ]);
+  });
+  it('the README and the demo put no threaded fitting on steel lines of NPS 3 and above', async () => {
+    // Common practice: threaded steel joints are for small bore (about NPS 2 and below);
+    // larger steel lines are flanged or welded, so their elbows are `elbow-90-flanged`.
+    const { fitting } = await import('../../src/losses');
+    const threaded = (id: string) => fitting(id).description.includes('threaded');
+    const demo = JSON.parse(read('docs/examples/canal-lift.json')) as {
+      line: { run?: { pipe?: { standard: string; size: string }; fittings?: { id: string }[] } }[];
+    };
+    let steelRuns = 0;
+    for (const { run } of demo.line) {
+      if (run?.pipe?.standard !== 'steel' || Number(run.pipe.size) < 3) continue;
+      steelRuns++;
+      for (const f of run.fittings ?? []) expect(threaded(f.id), f.id).toBe(false);
+    }
+    expect(steelRuns).toBeGreaterThan(0);
+    const sample = read('docs/examples/readme-node.ts');
+    expect(sample).toContain("pipeSize('3', '40')");
+    for (const [, id] of sample.matchAll(/id: '([\w-]+)'/g)) {
+      expect(threaded(id ?? ''), id).toBe(false);
+    }
   });
   it('the Deno sample is the file Deno runs (tests/deno/readme.deno.ts), after its import', () => {
     const block =

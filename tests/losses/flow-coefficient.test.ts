@@ -6,7 +6,9 @@ import {
   CV_CONSTANT,
   CV_WATER_DENSITY,
   cvFromK,
+  FLOW_COEFFICIENT_WATER_DENSITY,
   KV_CONSTANT,
+  KV_PER_CV,
   KV_WATER_DENSITY,
   kFromCv,
   kFromKv,
@@ -31,12 +33,35 @@ describe('constants', () => {
       .div(8 * KV_WATER_DENSITY);
     expectRelative(KV_CONSTANT, kv.toNumber(), 1e-15);
     // The figures quoted in the doc comments.
-    expectRelative(CV_CONSTANT * 0.0254 ** 4, 890.36, 1e-5);
-    expectRelative(KV_CONSTANT * 1e-12, 1.59888e-3, 1e-5);
+    expectRelative(CV_CONSTANT * 0.0254 ** 4, 890.29, 1e-5);
+    expectRelative(KV_CONSTANT * 1e-12, 1.60032e-3, 1e-5);
   });
-  it('Cv water density is water at 60 degF, 1 atm by IAPWS-IF97 (src/fluids), rounded to 0.01', () => {
-    const rho = waterDensity(q(60, 'degF'), q(101325, 'Pa'));
-    expect(Math.abs(rho - CV_WATER_DENSITY)).toBeLessThan(0.005);
+  it('one reference water for Cv and Kv: water at 15 degC, 1 atm by IAPWS-IF97 (src/fluids), rounded to 0.01', () => {
+    // IEC 60534-2-1 refers both coefficients to water at 15 degC (from memory).
+    const rho = waterDensity(q(15, 'degC'), q(101325, 'Pa'));
+    expect(Math.abs(rho - FLOW_COEFFICIENT_WATER_DENSITY)).toBeLessThan(0.005);
+    expect(CV_WATER_DENSITY).toBe(FLOW_COEFFICIENT_WATER_DENSITY);
+    expect(KV_WATER_DENSITY).toBe(FLOW_COEFFICIENT_WATER_DENSITY);
+    // ISA-75.01's 60 degF water is within 1e-4 of it (IAPWS-IF97).
+    const rho60F = waterDensity(q(60, 'degF'), q(101325, 'Pa'));
+    expectRelative(rho60F, FLOW_COEFFICIENT_WATER_DENSITY, 1e-4);
+  });
+  it('kFromKv and kFromCv give the same K for the same valve (Kv = KV_PER_CV x Cv)', () => {
+    // KV_PER_CV = (1 gal/min in m3/h) sqrt(1 bar / 1 psi), exact NIST SP 811 factors, in 40 digits.
+    Decimal.set({ precision: 40 });
+    const gpmInM3h = new Decimal('0.0254').pow(3).mul(231).mul(60);
+    const psi = new Decimal('0.45359237').mul('9.80665').div(new Decimal('0.0254').pow(2));
+    expectRelative(KV_PER_CV, gpmInM3h.mul(new Decimal(1e5).div(psi).sqrt()).toNumber(), 1e-15);
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-2, max: 1e4, noNaN: true }),
+        fc.double({ min: 5e-3, max: 2, noNaN: true }),
+        (cv, dm) => {
+          const d = dm as Length;
+          expectRelative(kFromKv(KV_PER_CV * cv, d), kFromCv(cv, d), 1e-14);
+        },
+      ),
+    );
   });
 });
 
@@ -56,10 +81,10 @@ describe('kFromCv, cvFromK, kFromKv, kvFromK', () => {
     expectHeadflowError(() => kvFromK(1, q(0, 'mm')), 'INVALID_ARGUMENT');
   });
   it('doc examples', () => {
-    expectRelative(kFromCv(100, q(2, 'in')), 1.42458, 1e-5);
-    expectRelative(cvFromK(1.42458, q(2, 'in')), 100, 1e-5);
-    expectRelative(kFromKv(100, q(50, 'mm')), 0.9993, 1e-5);
-    expectRelative(kvFromK(0.9993, q(50, 'mm')), 100, 1e-5);
+    expectRelative(kFromCv(100, q(2, 'in')), 1.42446, 1e-5);
+    expectRelative(cvFromK(1.42446, q(2, 'in')), 100, 1e-5);
+    expectRelative(kFromKv(100, q(50, 'mm')), 1.0002, 1e-5);
+    expectRelative(kvFromK(1.0002, q(50, 'mm')), 100, 1e-5);
   });
   it('K from Cv reproduces the pressure drop of the Cv definition (1 psi at Cv gal/min of reference water)', () => {
     const d = q(3, 'in');
@@ -90,17 +115,11 @@ describe('kFromCv, cvFromK, kFromKv, kvFromK', () => {
       ),
     );
   });
-  it('Kv / Cv through a common K is 0.865 (common practice: "Kv = 0.865 Cv"; from memory)', () => {
+  it("Kv / Cv through a common K is IEC 60534-2-1's 0.865 (N1 = 0.0865 for Cv and 0.1 for Kv, m3/h and kPa; from memory)", () => {
     const d = q(100, 'mm');
     const kv = kvFromK(kFromCv(1, d), d);
-    // Exact with these definitions: (gpm in m3/h) sqrt(bar/psi) sqrt(rho_Cv / rho_Kv).
-    const gpmInM3h = (231 * 0.0254 ** 3 * 60) / 1;
-    const psi = (0.45359237 * 9.80665) / 0.0254 ** 2;
-    expectRelative(
-      kv,
-      gpmInM3h * Math.sqrt((1e5 / psi) * (CV_WATER_DENSITY / KV_WATER_DENSITY)),
-      1e-14,
-    );
-    expect(Math.abs(kv - 0.865)).toBeLessThan(0.0005);
+    expectRelative(kv, KV_PER_CV, 1e-14);
+    // The standard prints three digits: 0.0865 / 0.1 = 0.865.
+    expect(Math.abs(kv - 0.0865 / 0.1)).toBeLessThan(0.0005);
   });
 });

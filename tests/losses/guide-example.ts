@@ -29,8 +29,8 @@ const run = fittingSet(
 console.log(run.k(re).toFixed(3)); // 4.531
 
 // A control valve given by its Cv, referred to the same pipe.
-console.log(kFromCv(120, d).toFixed(3)); // 16.269
-console.log(cvFromK(16.269, d).toFixed(1)); // 120.0
+console.log(kFromCv(120, d).toFixed(3)); // 16.268
+console.log(cvFromK(16.268, d).toFixed(1)); // 120.0
 
 // A reducer opening from 50 mm to the 4 in line (referred to the 50 mm pipe).
 console.log(suddenExpansionK(q(50, 'mm'), d).toFixed(3)); // 0.579

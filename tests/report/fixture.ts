@@ -68,6 +68,8 @@ const duty: CaseDuty[] = [
     staticHead: q(12, 'm'),
     lossHead: q(18, 'm'),
     npshAvailable: q(9.5, 'm'),
+    suctionPressure: q(101.325, 'kPa'),
+    dischargePressure: q(301.325, 'kPa'),
     runs: [run('suction', QD, 0.25, 1.2, -2), run('discharge', QD, 0.2, 16.8, 14)],
   },
   {
@@ -76,6 +78,8 @@ const duty: CaseDuty[] = [
     staticHead: q(14.5, 'm'),
     lossHead: q(23.5, 'm'),
     npshAvailable: q(6.2, 'm'),
+    suctionPressure: q(101.325, 'kPa'),
+    dischargePressure: q(351.325, 'kPa'),
     runs: [run('suction', QD, 0.25, 1.6, -2), run('discharge', QD, 0.2, 21.9, 16.5)],
   },
 ];
@@ -290,6 +294,7 @@ export const REPORT: DesignReport = {
   units: 'si',
   dutyFlow: q(QD, 'm3/s'),
   fluid: 'water at 30 degC',
+  atmosphere: q(101.325, 'kPa'),
   duty,
   candidates: [candidateA, candidateB],
   checks: [

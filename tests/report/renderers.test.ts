@@ -219,10 +219,22 @@ describe('text report', () => {
     expect(row(us, AGED_CASE)).toEqual(['47.57', '77.10', '124.7', '20.34']);
   });
 
+  it('echoes the pressure of each end both ways, absolute and gauge against the atmosphere', () => {
+    // The fixture: open suction at 101.325 kPa, discharge 301.325 kPa absolute, atmosphere
+    // 101.325 kPa; 101.325 kPa = 14.696 psi (NIST SP 811: psi = 6.894757 kPa).
+    expect(si).toContain('Atmosphere: 101.3 kPa abs');
+    expect(si).toMatch(/Suction\s+Suction\s+Discharge\s+Discharge/);
+    expect(si).toMatch(/\(kPa abs\)\s+\(kPa gauge\)\s+\(kPa abs\)\s+\(kPa gauge\)/);
+    expect(row(si, DESIGN_CASE, 1)).toEqual(['101.3', '0', '301.3', '200.0']);
+    expect(row(si, AGED_CASE, 1)).toEqual(['101.3', '0', '351.3', '250.0']);
+    expect(us).toMatch(/\(psia\)\s+\(psig\)\s+\(psia\)\s+\(psig\)/);
+    expect(row(us, DESIGN_CASE, 1)).toEqual(['14.70', '0', '43.70', '29.01']);
+  });
+
   it('prints each case of each candidate with the expected numbers (SI)', () => {
     // candidate A, design case: 1480 rpm; 0.0782 m3/s = 281.52 m3/h; 31.57 m; 81.94 %;
     // 29 430 W = 29.43 kW; 97.26 % of BEP; NPSHa 9.456 m, NPSHr 4.068 m, ratio 2.324.
-    expect(row(si, DESIGN_CASE, 1)).toEqual([
+    expect(row(si, DESIGN_CASE, 2)).toEqual([
       '1480',
       '281.5',
       '31.57',
@@ -235,7 +247,7 @@ describe('text report', () => {
       '2.32',
     ]);
     // candidate B, design case: no NPSH required data -> dashes for NPSHr and the ratio.
-    expect(row(si, DESIGN_CASE, 2)).toEqual([
+    expect(row(si, DESIGN_CASE, 3)).toEqual([
       '1390',
       '270.0',
       '30.00',
@@ -248,7 +260,7 @@ describe('text report', () => {
       '-',
     ]);
     // candidate B, aged case: no operating point -> a dash in every column and the reason.
-    expect(row(si, AGED_CASE, 2)).toEqual(Array(10).fill('-'));
+    expect(row(si, AGED_CASE, 3)).toEqual(Array(10).fill('-'));
     expect(folded(si)).toContain(
       `No operating point in case "${AGED_CASE}": at its maximum speed of 1480 rpm the set gives 34.72 m`,
     );
@@ -259,7 +271,7 @@ describe('text report', () => {
     if (a?.flow === undefined || a.head === undefined || a.shaftPower === undefined) {
       return expect.fail('fixture');
     }
-    const cells = row(us, DESIGN_CASE, 1);
+    const cells = row(us, DESIGN_CASE, 2);
     // 0.0782 m3/s = 1239.5 gal/min; 31.57 m = 103.58 ft; 29 430 W = 39.466 hp;
     // NPSHa 9.456 m = 31.02 ft; NPSHr 4.068 m = 13.35 ft.
     expect(cells).toEqual([
@@ -449,7 +461,7 @@ describe('Markdown report', () => {
 
   it('every table row has as many cells as its header, and a rule row', () => {
     const tables = markdownTables(md);
-    expect(tables.length).toBe(4); // duty, two candidates, ranking
+    expect(tables.length).toBe(5); // duty, end pressures, two candidates, ranking
     for (const t of tables) {
       expect(new Set(t).size, JSON.stringify(t)).toBe(1);
     }

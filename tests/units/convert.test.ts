@@ -25,10 +25,13 @@ describe('q and to: special values', () => {
   });
 
   it('rejects unknown units, the empty string and wrong case with UNKNOWN_UNIT', () => {
-    for (const u of ['', 'furlong', 'M', 'GPM', 'pa']) {
+    for (const u of ['', 'furlong', 'M', 'pa']) {
       const err = expectHeadflowError(() => q(1, u as UnitSymbol), 'UNKNOWN_UNIT');
       expect(err.message).toContain('not a known unit');
     }
+    // An alias is read from text only; q names the symbol to write.
+    const alias = expectHeadflowError(() => q(1, 'GPM' as UnitSymbol), 'UNKNOWN_UNIT');
+    expect(alias.message).toContain('alias of gal/min');
     expectHeadflowError(() => to(q(1, 'm'), 'parsec' as 'm'), 'UNKNOWN_UNIT');
   });
 
@@ -109,6 +112,9 @@ describe('unitsOf', () => {
       'ft3/s',
       'ft3/min',
       'Mgal/d',
+      'm3/d',
+      'ML/d',
+      'L/h',
     ]);
     for (const d of DIMENSIONS) expect(UNITS[unitsOf(d)[0] as UnitSymbol].factor).toBe(1);
   });

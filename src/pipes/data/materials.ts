@@ -4,23 +4,24 @@
  *
  * Sources (short names used in the rows):
  * - MOODY-1944: L. F. Moody, "Friction factors for pipe flow", Transactions of the ASME 66
- *   (1944) 671-684, Fig. 1 (roughness in feet for new, clean pipe). The same figures are
- *   reproduced by efunda ("Absolute Pipe Roughness", after Binder 1973) and piping-designer.
- * - HRW-TABLE-5: table "Colebrook-White roughness values", Table 5, columns Good (up to 20
- *   years of use) / Normal (40 to 50 years) / Poor (80 to 100 years), in mm, as reproduced
- *   in the document "Colebrook-White Roughness Values" (scribd 606782106). The table is the
- *   one of the HR Wallingford "Tables for the hydraulic design of pipes, sewers and channels"
- *   (attribution from memory).
+ *   (1944) 671-684, Fig. 1 (roughness in feet for new, clean pipe).
+ * - HRW-TABLE-5: HR Wallingford and D. I. H. Barr, "Tables for the hydraulic design of pipes,
+ *   sewers and channels" (Thomas Telford), the table of Colebrook-White roughness k_s by
+ *   pipe material, columns Good (up to 20 years of use) / Normal (40 to 50 years) / Poor (80
+ *   to 100 years), in mm. From memory: the values were read from a reproduction of the
+ *   table; the edition, page and table number of the book were not in hand.
  * - FGO-5.1: N. K. Shammas and L. K. Wang, "Fair, Geyer, and Okun's Water and Wastewater
  *   Engineering: Water Supply and Wastewater Removal", 3rd ed., Wiley 2011, Table 5.1
  *   "Values of the Hazen-Williams coefficient C for different conduit materials and age of
  *   conduit" (columns New / Uncertain).
- * - ETB-HW: Engineering ToolBox, "Hazen-Williams Coefficients" (table of C by material).
- * - LMNO-HW: LMNO Engineering, "Table of Hazen-Williams Coefficients".
  * - WS-2.1: E. B. Wylie and V. L. Streeter, "Fluid Transients in Systems", Prentice Hall
  *   1993, Table 2.1 (modulus of elasticity E and Poisson's ratio of pipe materials; the
  *   figures are recalled from memory, not read from a copy in hand: check them against the
  *   table or the manufacturer before a design relies on them).
+ * - NFPA-13: NFPA 13, "Standard for the Installation of Sprinkler Systems", the table of
+ *   Hazen-Williams C values for the pipe materials of sprinkler systems (from memory: the
+ *   edition and table number were not in hand).
+ * - AWWA-M41: AWWA Manual M41, "Ductile-Iron Pipe and Fittings" (from memory).
  *
  * @module
  */
@@ -90,7 +91,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'galvanized iron' 0.0005 ft",
       "aged roughness: HRW-TABLE-5 'Galvanised iron, coated cast iron generally', Normal 0.15 mm to Poor 0.3 mm",
-      "C: ETB-HW 'Galvanized iron' 120; LMNO-HW 'Galvanized iron' 120",
+      "C: NFPA-13 'Galvanized (all)' 120 (from memory); water-supply handbooks print the same 120 for galvanized iron (from memory)",
       "E and Poisson's ratio: as commercial steel, WS-2.1 'Mild steel' (from memory); the zinc coat is too thin to matter",
     ],
   },
@@ -108,7 +109,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'cast iron' 0.00085 ft",
       "aged roughness: HRW-TABLE-5 'Uncoated cast iron', Normal 0.3 mm to Poor 0.6 mm (tuberculated mains can be far rougher: same table, 'Old tuberculated water mains')",
-      "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100; LMNO-HW 'Cast-Iron, New, unlined' 130",
+      "C: FGO-5.1 'Cast-iron pipe, coated', New 130, Uncertain age 100",
       "E and Poisson's ratio: WS-2.1 'Cast iron' E 80-170 GPa, Poisson 0.25 (from memory); 100 GPa is typical of grey iron (from memory)",
     ],
   },
@@ -122,7 +123,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     poissonRatio: 0.28,
     sources: [
       "roughness: HRW-TABLE-5 'Spun bitumen or concrete lined', Normal 0.03 mm (the only column printed)",
-      "C: ETB-HW 'Cast-Iron, cement lined' 140; AWWA M41 Ductile-Iron Pipe and Fittings gives C = 140 for cement-mortar lined pipe (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
+      "C: AWWA-M41 gives C = 140 for cement-mortar lined ductile iron (from memory); NFPA-13 'Cement-lined cast or ductile iron' 140 (from memory). FGO-5.1 prints 130 for cement-lined cast iron used with the nominal diameter",
       "E and Poisson's ratio: ductile iron E = 24 000 000 psi (166 GPa), Poisson 0.28, as AWWA M41 gives them (from memory); the cement lining is not counted",
     ],
   },
@@ -137,7 +138,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     poissonRatio: 0.34,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft",
-      "C: ETB-HW 'Copper' 130 - 140 and LMNO-HW 'Copper' 130-140; the table keeps the lower end (more head loss)",
+      'C: 130, from memory: water-supply tables print 130 to 140 for copper (with brass, lead and tin); the table keeps the lower end (more head loss). NFPA-13 allows 150 for copper tube in sprinkler systems (from memory)',
       "E and Poisson's ratio: WS-2.1 'Copper' E 107-131 GPa, Poisson 0.34 (from memory)",
     ],
   },
@@ -151,8 +152,8 @@ export const MATERIALS: readonly MaterialRow[] = [
     elasticModulusRangeGPa: [2.4, 2.75],
     poissonRatio: 0.45,
     sources: [
-      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft, the class piping-designer lists as 'Drawn tubing (glass, brass, plastic)'",
-      "C: ETB-HW 'Polyvinyl chloride, PVC, CPVC' 150 (FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe')",
+      "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic is taken as drawn tubing; common practice)",
+      "C: NFPA-13 'Plastic (listed), all' 150 (from memory); FGO-5.1 prints 140 new, 130 uncertain age for 'Cement-asbestos and plastic pipe'",
       "E and Poisson's ratio: WS-2.1 'PVC, rigid' E 2.4-2.75 GPa (from memory); Poisson 0.45 (from memory); the upper E is kept (a faster wave, a higher surge)",
     ],
   },
@@ -166,7 +167,7 @@ export const MATERIALS: readonly MaterialRow[] = [
     poissonRatio: 0.46,
     sources: [
       "roughness: MOODY-1944 Fig. 1, 'drawn tubing' 0.000005 ft (smooth plastic, as for pvc)",
-      "C: ETB-HW 'Polyethylene, PE, PEH' 140",
+      "C: 140, from memory (the value water-supply practice commonly uses for PE pipe; FGO-5.1 prints 140 new for 'Cement-asbestos and plastic pipe')",
       "E and Poisson's ratio: WS-2.1 'Polyethylene' E 0.8 GPa (from memory); Poisson 0.46 (from memory). PE is viscoelastic: its effective E falls with load time and temperature",
     ],
   },
