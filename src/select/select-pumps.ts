@@ -33,7 +33,7 @@ import {
 } from '../units/index';
 import { type CheckedPump, checkCatalogue } from './catalogue';
 import { curveAt, type TrimBasis, trimForDuties } from './impeller';
-import { lifeCycleCost } from './life-cycle-cost';
+import { DEFAULT_LIFE_YEARS, lifeCycleCost } from './life-cycle-cost';
 import type {
   PumpCatalogue,
   Selection,
@@ -449,6 +449,7 @@ export function selectChecked(
       energy: r.energy,
       lifeCycleCost: lcc,
       report: r,
+      candidate: way.candidate,
     };
     return { entry, index };
   });
@@ -464,6 +465,12 @@ export function selectChecked(
     return a.index - b.index;
   });
   return {
+    name: design.name,
+    catalogue: catalogue.name,
+    dutyFlow: design.dutyFlow,
+    duty: report.duty,
+    cautions: report.cautions,
+    costs: costed ? { years: DEFAULT_LIFE_YEARS, ...costs } : undefined,
     ranked: entries.map(({ entry }, k) => ({ ...entry, rank: k + 1 })),
     rankedBy: costed ? 'life-cycle cost' : 'energy',
     currency,

@@ -4,7 +4,7 @@
  *
  * @module
  */
-import type { CandidateReport, Check } from '../design/index';
+import type { CandidateInput, CandidateReport, CaseDuty, Check } from '../design/index';
 import type { PipeDimensions } from '../pipes/index';
 import type { CataloguePoint, MotorRating, MotorSeries, PumpCurve } from '../pumps/index';
 import type { Flow, Length, Power, RotationalSpeed } from '../units/index';
@@ -200,10 +200,24 @@ export interface SelectionEntry {
   readonly lifeCycleCost: LifeCycleCost | undefined;
   /** The full evaluation of this way by `evaluateDesign`. */
   readonly report: CandidateReport;
+  /** The candidate this way is for `evaluateDesign` (to evaluate or chart it again). */
+  readonly candidate: CandidateInput;
 }
 
 /** The result of `selectPumps`. */
 export interface Selection {
+  /** The design's name. */
+  readonly name: string;
+  /** The catalogue's name, when it has one. */
+  readonly catalogue: string | undefined;
+  /** The duty flow. */
+  readonly dutyFlow: Flow;
+  /** The duty in each operating case. */
+  readonly duty: readonly CaseDuty[];
+  /** The usual engineering cautions. */
+  readonly cautions: readonly string[];
+  /** The money terms of the life-cycle cost as used (years, rates), when ranked by it. */
+  readonly costs: SelectionCosts | undefined;
   /** Every way for every pump; passing entries first, then by `rankedBy`. */
   readonly ranked: readonly SelectionEntry[];
   /** What orders the passing (and the failing) entries. */
