@@ -6,7 +6,16 @@
  * @module
  */
 import { displayUnits, type UnitSystem } from '../design/index';
-import { guardInteger, guardOneOf, guardOptions, guardRecord } from '../guards';
+import {
+  guardArray,
+  guardInteger,
+  guardNumber,
+  guardOneOf,
+  guardOptions,
+  guardRange,
+  guardRecord,
+  guardString,
+} from '../guards';
 import type { Selection, SelectionEntry } from '../select/index';
 import { type Flow, formatQuantity, type Length, type Power, to } from '../units/index';
 
@@ -98,6 +107,7 @@ function head(selection: Selection, units: UnitSystem): string[] {
       .join(', ')}.`,
     `Ranked by ${selection.rankedBy}${selection.rankedBy === 'life-cycle cost' ? ` (${selection.currency ?? 'currency of the prices'}, present value over ${selection.costs?.years ?? 20} years at ${round(100 * (selection.costs?.discountRate ?? 0), 3)} % discount, energy escalating ${round(100 * (selection.costs?.energyEscalation ?? 0), 3)} % a year)` : ' (kWh a year over the duty profile, design case)'}; every passing way ranks above every failing one.`,
     `% of BEP: range over the cases; valve loss: the largest hydraulic power a throttling valve burns to hold the duty flow.`,
+    ...(selection.notes ?? []).map((n) => `Note: ${n}`),
   ];
   return lines;
 }
@@ -191,6 +201,7 @@ function json(selection: Selection, entries: readonly SelectionEntry[], units: U
     rankedBy: selection.rankedBy,
     currency: selection.currency ?? null,
     costs: selection.costs ?? null,
+    notes: selection.notes ?? [],
     dutyFlow: quantity(selection.dutyFlow, u.flow, (v) => to(v as Flow, u.flow)),
     duty: selection.duty.map((d) => ({
       case: d.case,
@@ -238,6 +249,32 @@ function json(selection: Selection, entries: readonly SelectionEntry[], units: U
   return `${JSON.stringify(doc, null, 2)}\n`;
 }
 
+/** The shape a rendering reads (a selection from `selectPumps` always has it). */
+function checkSelection(selection: Selection): void {
+  const s = guardRecord('selection', selection);
+  guardString('selection.name', s['name']);
+  guardRange('selection.dutyFlow', s['dutyFlow'], { min: 0, minOpen: true, unit: 'm3/s' });
+  guardOneOf('selection.rankedBy', s['rankedBy'], ['life-cycle cost', 'energy'] as const);
+  guardArray('selection.cautions', s['cautions']).forEach((c, i) => {
+    guardString(`selection.cautions[${i}]`, c, 10_000);
+  });
+  guardArray('selection.duty', s['duty']).forEach((d, i) => {
+    const r = guardRecord(`selection.duty[${i}]`, d);
+    guardString(`selection.duty[${i}].case`, r['case']);
+    guardNumber(`selection.duty[${i}].head`, r['head']);
+  });
+  guardArray('selection.ranked', s['ranked']).forEach((e, i) => {
+    const r = guardRecord(`selection.ranked[${i}]`, e);
+    guardString(`selection.ranked[${i}].label`, r['label'], 1000);
+    guardArray(`selection.ranked[${i}].cases`, r['cases']).forEach((c, j) => {
+      guardRecord(`selection.ranked[${i}].cases[${j}]`, c);
+    });
+    guardArray(`selection.ranked[${i}].checks`, r['checks']).forEach((c, j) => {
+      guardRecord(`selection.ranked[${i}].checks[${j}]`, c);
+    });
+  });
+}
+
 /**
  * Renders a pump selection (from `selectPumps`) as terminal text, Markdown or JSON (format
  * `headflow-selection/1`, every quantity `{ value, unit }` in the chosen units). The text and
@@ -256,7 +293,7 @@ export function renderSelection(
   selection: Selection,
   options?: SelectionRenderOptions | null,
 ): string {
-  guardRecord('selection', selection);
+  checkSelection(selection);
   const o = guardOptions<SelectionRenderOptions>('options', options);
   const format =
     o.format === undefined

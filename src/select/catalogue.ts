@@ -43,6 +43,13 @@ function fraction(parameter: string, value: unknown): number {
   return guardRange(parameter, value, { min: 0, minOpen: true, max: 1 });
 }
 
+/** Catalogue points: 3 to 1000 objects (their values are checked by `pumpCurve`). */
+function checkPoints(parameter: string, value: unknown): void {
+  guardArray(parameter, value, { min: 3, max: 1000 }).forEach((p, i) => {
+    guardRecord(`${parameter}[${i}]`, p);
+  });
+}
+
 /**
  * Checks a catalogue and builds every pump's curves.
  * @throws HeadflowError `INVALID_ARGUMENT` naming the field (`catalogue.pumps[3].drive.maxSpeed`)
@@ -80,7 +87,7 @@ export function checkCatalogue(catalogue: unknown, at = 'catalogue'): readonly C
       guardField(where, p, 'impellerDiameter'),
       'm',
     );
-    guardArray(`${where}.points`, guardField(where, p, 'points'), { min: 3, max: 1000 });
+    checkPoints(`${where}.points`, guardField(where, p, 'points'));
     const curves =
       p['curves'] === undefined ? [] : guardArray(`${where}.curves`, p['curves'], { max: 100 });
     curves.forEach((k, j) => {
@@ -90,10 +97,7 @@ export function checkCatalogue(catalogue: unknown, at = 'catalogue'): readonly C
         guardField(`${where}.curves[${j}]`, r, 'impellerDiameter'),
         'm',
       );
-      guardArray(`${where}.curves[${j}].points`, guardField(`${where}.curves[${j}]`, r, 'points'), {
-        min: 3,
-        max: 1000,
-      });
+      checkPoints(`${where}.curves[${j}].points`, guardField(`${where}.curves[${j}]`, r, 'points'));
     });
     const family = impellerFamily(p as unknown as CataloguePump, where);
     const smallestCurve = family.members[0]?.diameter ?? full;

@@ -17,7 +17,7 @@ import {
 import type { PipeDimensions } from '../pipes/index';
 import type { LineElement, PipeRunInput } from '../system/index';
 import { checkCatalogue } from './catalogue';
-import { resolveSelectOptions, selectChecked } from './select-pumps';
+import { checkDesign, resolveSelectOptions, selectChecked } from './select-pumps';
 import type {
   PipeSizeOptions,
   PipeSizeResult,
@@ -115,7 +115,7 @@ export function economicPipeSize(
   catalogue: PumpCatalogue,
   options: PipeSizeOptions,
 ): PipeSizeResult {
-  guardRecord('design', design);
+  checkDesign(design);
   const pumps = checkCatalogue(catalogue);
   const choices = choicesOf(design, options);
   const settings = resolveSelectOptions(design, options);

@@ -360,7 +360,8 @@ function casesOf(
  * energy cost; the other components from `options.costs`).
  *
  * Ranking: every passing entry above every failing one; within each, by life-cycle cost when
- * costs are given (`options.costs`, or a price on any pump), else by the year's energy.
+ * costs are given (`options.costs`, or a price on any pump), else by the year's energy; ties
+ * by energy. Without an energy price the life-cycle cost leaves energy out (a note says so).
  *
  * @param design - the design (its candidates are ignored)
  * @param catalogue - the pumps to choose from
@@ -377,10 +378,21 @@ export function selectPumps(
   catalogue: PumpCatalogue,
   options?: SelectOptions | null,
 ): Selection {
-  guardRecord('design', design);
+  checkDesign(design);
   const pumps = checkCatalogue(catalogue);
   const settings = settingsOf(design, options);
   return selectChecked(design, catalogue, pumps, settings);
+}
+
+/**
+ * The checks of a design that the selection relies on before `evaluateDesign` checks the rest.
+ * @internal
+ */
+export function checkDesign(design: DesignInput): void {
+  const d = guardRecord('design', design);
+  guardRecord('design.system', d['system']);
+  guardRange('design.dutyFlow', d['dutyFlow'], { min: 0, minOpen: true, unit: 'm3/s' });
+  if (d['cases'] !== undefined) guardArray('design.cases', d['cases'], { max: 1000 });
 }
 
 /** {@link selectPumps} on a checked catalogue and resolved options. @internal */
@@ -462,6 +474,9 @@ export function selectChecked(
     const ka = key(a.entry);
     const kb = key(b.entry);
     if (ka !== kb) return ka < kb ? -1 : 1;
+    const ea = a.entry.energy?.kWh ?? Number.POSITIVE_INFINITY;
+    const eb = b.entry.energy?.kWh ?? Number.POSITIVE_INFINITY;
+    if (ea !== eb) return ea < eb ? -1 : 1;
     return a.index - b.index;
   });
   return {
@@ -475,6 +490,12 @@ export function selectChecked(
     rankedBy: costed ? 'life-cycle cost' : 'energy',
     currency,
     systemChecks: report.checks,
+    notes:
+      costed && settings.energyPrice === undefined
+        ? [
+            'No energy price was given (the design has none and options.energyPrice is not set): the life-cycle cost leaves energy out, and ways of equal cost are ordered by energy.',
+          ]
+        : [],
   };
 }
 

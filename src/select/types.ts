@@ -226,6 +226,8 @@ export interface Selection {
   readonly currency: string | undefined;
   /** Checks of the system (the same in every entry's evaluation). */
   readonly systemChecks: readonly Check[];
+  /** Notes on the ranking (for example: no energy price, so energy is not costed). */
+  readonly notes: readonly string[];
 }
 
 /** A candidate size of a pipe run, with its installed cost. */

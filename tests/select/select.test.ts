@@ -13,6 +13,15 @@ describe('selectPumps input', () => {
   it('refuses impossible input with the field named', () => {
     expectHeadflowError(() => selectPumps(null as never, catalogue), 'INVALID_ARGUMENT');
     expectHeadflowError(() => selectPumps(design, null as never), 'INVALID_ARGUMENT');
+    expectHeadflowError(() => selectPumps({} as never, catalogue), 'INVALID_ARGUMENT');
+    expectHeadflowError(
+      () => selectPumps({ ...design, dutyFlow: Number.NaN } as never, catalogue),
+      'INVALID_ARGUMENT',
+    );
+    expectHeadflowError(
+      () => selectPumps({ ...design, cases: 'all' } as never, catalogue),
+      'INVALID_ARGUMENT',
+    );
     expectHeadflowError(() => selectPumps(design, { pumps: [] }), 'INVALID_ARGUMENT');
     const noMotor = expectHeadflowError(
       () => selectPumps(design, { pumps: [parabolicPump('P', A, B, 110)] }),
