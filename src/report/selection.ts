@@ -235,6 +235,10 @@ function json(selection: Selection, entries: readonly SelectionEntry[], units: U
         throttleHead: quantity(c.throttleHead, u.head, (v) => to(v as Length, u.head)),
         throttlePower: quantity(c.throttlePower, u.power, (v) => to(v as Power, u.power)),
         inputPower: quantity(c.inputPower, u.power, (v) => to(v as Power, u.power)),
+        energy:
+          c.energy === undefined
+            ? null
+            : { kWh: round(c.energy.kWh, 6), cost: c.energy.cost ?? null },
       })),
       checks: e.checks.map((c) => ({
         id: c.id,

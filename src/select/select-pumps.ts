@@ -10,6 +10,7 @@ import {
   type CandidateReport,
   type CaseDuty,
   type Check,
+  DESIGN_DEFAULTS,
   type DesignInput,
   evaluateDesign,
 } from '../design/index';
@@ -22,7 +23,7 @@ import {
   guardRecord,
   guardString,
 } from '../guards';
-import type { PumpCurve } from '../pumps/index';
+import { annualEnergy, type ProfileRow, type PumpCurve } from '../pumps/index';
 import { type ScenarioCurve, systemScenarios } from '../system/index';
 import {
   type Flow,
@@ -287,6 +288,8 @@ function casesOf(
   duty: readonly CaseDuty[],
   family: readonly ScenarioCurve[],
   dutyFlow: number,
+  profile: readonly ProfileRow[],
+  price: Settings['energyPrice'],
 ): SelectionCase[] {
   const driveEfficiency = way.method === 'speed' ? (way.pump.drive?.efficiency ?? 1) : 1;
   const chain = way.pump.motorEfficiency * driveEfficiency;
@@ -321,6 +324,30 @@ function casesOf(
         }
       }
     }
+    let energy: SelectionCase['energy'];
+    const curve = family[i]?.curve;
+    if (c.failure === undefined && def !== undefined && curve !== undefined) {
+      try {
+        const year = annualEnergy({
+          pump: way.curve,
+          system: curve,
+          profile,
+          density: def.fluid.density,
+          motorEfficiency: way.pump.motorEfficiency,
+          driveEfficiency,
+          control: way.method === 'speed' ? 'speed' : 'throttle',
+          ...(way.method === 'speed' && way.pump.drive !== undefined
+            ? { maxSpeed: way.pump.drive.maxSpeed }
+            : {}),
+          ...(price === undefined ? {} : { price }),
+          ...(def.g === undefined ? {} : { g: def.g }),
+        });
+        energy = { kWh: year.totalKWh, cost: year.cost };
+      } catch (e) {
+        if (!(e instanceof HeadflowError)) throw e;
+        energy = undefined;
+      }
+    }
     return {
       case: c.case,
       failure: c.failure,
@@ -334,6 +361,7 @@ function casesOf(
       throttleHead: throttleHead as Length | undefined,
       throttlePower: throttlePower as Power | undefined,
       inputPower: inputPower as Power | undefined,
+      energy,
     };
   });
 }
@@ -354,7 +382,8 @@ function casesOf(
  * a case needs less than the drive's lowest speed).
  *
  * Each entry reports the trim diameter or speed, per case the throttling loss (head and
- * power), % of BEP, NPSH margin and input power, the motor, the year's energy (design case,
+ * power), % of BEP, NPSH margin, input power and the year's energy were the system in that
+ * case all year, the motor, the year's energy (design case,
  * over the duty profile) and the life-cycle cost ({@link lifeCycleCost}: initial = the pump's
  * price, plus the drive's for `'speed'` and `costs.trim` for a trim; energy = the year's
  * energy cost; the other components from `options.costs`).
@@ -409,6 +438,9 @@ export function selectChecked(
   const dutyFlow = design.dutyFlow as number;
   const needs = family.map((s) => ({ flow: dutyFlow, head: s.curve.head(design.dutyFlow) }));
   const ways = pumps.flatMap((p) => waysOf(p, needs, settings));
+  const profile = design.profile ?? [
+    { flow: design.dutyFlow, hours: DESIGN_DEFAULTS.hoursPerYear },
+  ];
   const report = evaluateDesign({
     ...design,
     candidates: ways.map((w) => w.candidate),
@@ -429,7 +461,7 @@ export function selectChecked(
     const own = wayChecks(way, r, settings);
     const checks = [...r.checks, ...own];
     const passed = r.passed && !own.some((k) => k.severity === 'error');
-    const cases = casesOf(way, r, report.duty, family, dutyFlow);
+    const cases = casesOf(way, r, report.duty, family, dutyFlow, profile, settings.energyPrice);
     const initial =
       (way.pump.price ?? 0) +
       (way.method === 'speed' ? (way.pump.drive?.price ?? 0) : 0) +

@@ -160,6 +160,16 @@ export interface SelectionCase {
   readonly throttlePower: Power | undefined;
   /** Electrical input power at the duty flow (shaft / (motor x drive efficiency)). */
   readonly inputPower: Power | undefined;
+  /**
+   * Energy of a year over the duty profile were the system in this case all year (kWh), and
+   * its cost at the energy price; undefined when the profile cannot be met in this case.
+   */
+  readonly energy:
+    | {
+        readonly kWh: number;
+        readonly cost: { readonly amount: number; readonly currency: string } | undefined;
+      }
+    | undefined;
 }
 
 /** One way to meet the duty with one catalogue pump. */

@@ -70,6 +70,10 @@ describe('selectPumps against closed forms', () => {
     expectRelative(to(full?.cases[0]?.throttleHead ?? q(0, 'm'), 'm'), dh, 1e-9);
     const rhoG = 998.2 * 9.80665; // water at 20 degC is 998.21 kg/m3 (IAPWS-IF97); checked loosely
     expectRelative(full?.cases[0]?.throttlePower ?? 0, rhoG * (80 / 3600) * dh, 1e-4, 'rho g Q dH');
+    // A year at the duty in the one case: input power x 8760 h, and the design's own energy.
+    const year = ((full?.cases[0]?.inputPower ?? 0) * 8760) / 1000;
+    expectRelative(full?.cases[0]?.energy?.kWh ?? 0, year, 1e-12, 'case energy');
+    expectRelative(full?.energy?.kWh ?? 0, year, 1e-12, 'design energy');
     // Where the unthrottled full pump runs: A - B Q^2 = Hs + k Q^2, Q = sqrt(30 / 0.003).
     expectRelative(to(full?.cases[0]?.flow ?? q(0, 'm3/h'), 'm3/h'), Math.sqrt(30 / 0.003), 1e-9);
   });
