@@ -7,7 +7,7 @@
  *
  * The table times a 20-pump catalogue with tinybench; the notes time 10-, 100- and 1000-pump
  * catalogues with a plain clock (a 1000-pump selection takes seconds, too long for tinybench's
- * 64 iterations), each repeated to the same total work, best of 2 runs.
+ * 64 iterations), each repeated to the same total work, best of 3 runs.
  */
 import { readFileSync } from 'node:fs';
 import { type DesignInput, evaluateDesign, readScenario } from '../src/design/index';
@@ -62,7 +62,7 @@ if (first === undefined) throw new Error('the bench catalogue meets the duty in 
 const one = [first];
 
 /** Seconds per call of f, best of `runs` runs of `repeat` calls. */
-function seconds(f: () => unknown, repeat: number, runs = 2): number {
+function seconds(f: () => unknown, repeat: number, runs = 3): number {
   let best = Number.POSITIVE_INFINITY;
   for (let r = 0; r < runs; r++) {
     const t0 = performance.now();

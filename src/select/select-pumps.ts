@@ -12,6 +12,7 @@ import {
   type Check,
   DESIGN_DEFAULTS,
   type DesignInput,
+  type DesignReport,
   evaluateDesign,
 } from '../design/index';
 import { HeadflowError } from '../errors';
@@ -55,6 +56,9 @@ export const SELECT_DEFAULTS = {
 } as const;
 
 const METHODS: readonly SelectionMethod[] = ['throttle', 'trim', 'speed'];
+
+/** Ways evaluated by one evaluateDesign call. */
+const BATCH = 128;
 const COST_KEYS: readonly (keyof SelectionCosts)[] = [
   'years',
   'discountRate',
@@ -441,13 +445,19 @@ export function selectChecked(
   const profile = design.profile ?? [
     { flow: design.dutyFlow, hours: DESIGN_DEFAULTS.hoursPerYear },
   ];
-  const report = evaluateDesign({
-    ...design,
-    candidates: ways.map((w) => w.candidate),
-    ...(settings.energyPrice === undefined ? {} : { energyPrice: settings.energyPrice }),
-  });
+  // The ways go to evaluateDesign in batches, so that the sampled chart curves of each batch's
+  // report are dropped early (a long catalogue otherwise holds them all at once).
   const byName = new Map<string, CandidateReport>();
-  for (const r of report.candidates) byName.set(r.name, r);
+  let report: DesignReport | undefined;
+  for (let start = 0; start === 0 || start < ways.length; start += BATCH) {
+    report = evaluateDesign({
+      ...design,
+      candidates: ways.slice(start, start + BATCH).map((w) => w.candidate),
+      ...(settings.energyPrice === undefined ? {} : { energyPrice: settings.energyPrice }),
+    });
+    for (const r of report.candidates) byName.set(r.name, r);
+  }
+  if (report === undefined) throw new HeadflowError('NO_SOLUTION', 'no evaluation was made.');
   const costed =
     settings.costs !== undefined ||
     pumps.some((p) => p.price !== undefined || p.drive?.price !== undefined);
