@@ -97,6 +97,7 @@ interface Way {
         readonly ratio: number;
         readonly basis: TrimBasis;
         readonly lawRatio: number;
+        readonly iterations: number;
       }
     | undefined;
   readonly candidate: CandidateInput;
@@ -207,6 +208,7 @@ function waysOf(
             ratio: found.diameter / p.family.full,
             basis,
             lawRatio: found.diameter / smallest,
+            iterations: found.iterations,
           },
           candidate: { name: label, pump: running, ...base },
         });
@@ -495,6 +497,7 @@ export function selectChecked(
       trimDiameter: way.trim === undefined ? undefined : (way.trim.diameter as Length),
       trimRatio: way.trim?.ratio,
       trimBasis: way.trim?.basis,
+      trimIterations: way.trim?.iterations,
       speed,
       passed,
       checks,

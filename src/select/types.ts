@@ -188,6 +188,8 @@ export interface SelectionEntry {
   readonly trimDiameter: Length | undefined;
   /** Trim diameter as a fraction of the full impeller (`'trim'`), else undefined. */
   readonly trimRatio: number | undefined;
+  /** `'trim'`: Brent iterations of the trim search over all cases (bounded by 200 a case). */
+  readonly trimIterations: number | undefined;
   /** `'trim'`: how the curve was found (the trim law, or between catalogue curves). */
   readonly trimBasis: 'trim law' | 'interpolated' | 'catalogue curve' | undefined;
   /** Motor speed (`'throttle'`, `'trim'`) or the highest speed the drive needs (`'speed'`). */

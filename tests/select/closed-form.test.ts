@@ -36,6 +36,7 @@ describe('selectPumps against closed forms', () => {
     expect(trim?.trimBasis).toBe('trim law');
     expectRelative(to(trim?.trimDiameter ?? q(0, 'm'), 'mm'), 250 * r, TOL);
     expectRelative(trim?.trimRatio ?? 0, r, TOL);
+    expect(trim?.trimIterations ?? 99).toBeLessThan(20);
     // The trimmed pump meets the system at the duty flow: no throttling left.
     expectRelative(to(trim?.cases[0]?.flow ?? q(0, 'm3/h'), 'm3/h'), 80, 1e-8);
     expect(to(trim?.cases[0]?.throttleHead ?? q(1, 'm'), 'm')).toBeLessThan(1e-8);
