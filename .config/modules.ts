@@ -12,5 +12,6 @@ export const publicModules = [
   'system',
   'pumps',
   'design',
+  'select',
   'report',
 ] as const;

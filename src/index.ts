@@ -14,5 +14,6 @@ export * from './losses/index';
 export * from './pipes/index';
 export * from './pumps/index';
 export * from './report/index';
+export * from './select/index';
 export * from './system/index';
 export * from './units/index';

@@ -18,8 +18,10 @@ import {
   renderChart,
   renderJson,
   renderMarkdown,
+  renderSelection,
   renderText,
 } from '../report/index';
+import { type PumpCatalogue, readCatalogue, type Selection, selectPumps } from '../select/index';
 
 /** Report formats the command writes. */
 export type ReportFormat = 'text' | 'markdown' | 'json';
@@ -30,7 +32,19 @@ export interface Engine {
   evaluate(design: DesignInput): DesignReport;
   render(report: DesignReport, format: ReportFormat, units: UnitSystem | undefined): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
+  readCatalogue(json: string, source: string): PumpCatalogue;
+  select(design: DesignInput, catalogue: PumpCatalogue): Selection;
+  renderSelection(
+    selection: Selection,
+    format: ReportFormat,
+    units: UnitSystem | undefined,
+  ): string;
+  /** The chart of the design with the leading passing ways of a selection as candidates. */
+  selectionChart(design: DesignInput, selection: Selection, units: UnitSystem | undefined): string;
 }
+
+/** Ways of a selection drawn on its chart. */
+const CHARTED = 3;
 
 function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
   return units === undefined ? {} : { units };
@@ -47,4 +61,14 @@ export const libraryEngine: Engine = {
     return renderText(report, options);
   },
   chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),
+  readCatalogue: (json, source) => readCatalogue(json, { source }),
+  select: (design, catalogue) => selectPumps(design, catalogue),
+  renderSelection: (selection, format, units) =>
+    renderSelection(selection, { format, ...unitsOption(units) }),
+  selectionChart(design, selection, units) {
+    const leading = selection.ranked.filter((e) => e.passed).slice(0, CHARTED);
+    const shown = leading.length > 0 ? leading : selection.ranked.slice(0, 1);
+    const report = evaluateDesign({ ...design, candidates: shown.map((e) => e.candidate) });
+    return renderChart(chartSpecFromReport(report, unitsOption(units)));
+  },
 };

@@ -48,30 +48,40 @@ const UNIT_SYSTEMS: readonly UnitSystem[] = ['si', 'us'];
 
 /** The text of `headflow --help`. */
 export const HELP = `Usage: headflow <scenario.json> [options]
+       headflow evaluate <scenario.json> [options]
+       headflow select <scenario.json> --catalogue <pumps.json> [options]
 
-Reads a scenario file (a design described in JSON, format headflow-scenario/1), evaluates
-every operating case and candidate pump, and prints the report.
+evaluate (also the bare form): reads a scenario file (a design described in JSON, format
+headflow-scenario/1), evaluates every operating case and candidate pump, and prints the report.
+select: ranks every pump of a catalogue (format headflow-pump-catalogue/1) for the scenario's
+duty, each with its full impeller throttled, trimmed, or on a drive, by life-cycle cost when
+the catalogue has prices (else by energy); the scenario's own candidates are not used.
 
 Options:
   -f, --format <text|markdown|json>  report format (default: text)
   -u, --units <si|us>                units of the report (default: the file's "units", else si)
   -o, --output <file>                write the report to a file instead of standard output
-      --chart <file.svg>             also write the SVG chart of the curves
+      --chart <file.svg>             also write the SVG chart of the curves (select: the
+                                     three leading passing ways)
+  -c, --catalogue <file.json>        the pump catalogue (select only)
   -h, --help                         print this help
   -v, --version                      print the version
 
 Exit codes:
-  0  the report was written and every check passed (no check is an error)
+  0  the report was written and every check passed (no check is an error); select: the
+     leading way passes every check
   1  the report was written and at least one check failed: a system check, or a
-     candidate's (the ranking still lists the passing candidates first)
+     candidate's (the ranking still lists the passing candidates first); select: no
+     way passes
   2  the input could not be used (arguments, or a file that is missing or not a design)
   3  an internal error (please report it)
 
 The format of scenario files: docs/scenario-format.md; a JSON Schema for editors:
-docs/scenario.schema.json.
+docs/scenario.schema.json. Catalogues: docs/select.md and docs/pump-catalogue.schema.json.
 
-Example:
+Examples:
   headflow canal-lift.json --format markdown --units us --chart canal-lift.svg -o canal-lift.md
+  headflow select canal-lift.json --catalogue pump-catalogue.json
 
 The report supports, and does not replace, licensed engineering judgement and local codes.
 `;
@@ -79,7 +89,12 @@ The report supports, and does not replace, licensed engineering judgement and lo
 /** A fault of the input (arguments or files): exit 2 with its message. */
 class InputError extends Error {}
 
+/** The subcommands; the bare form is `evaluate`. */
+const COMMANDS = ['evaluate', 'select'] as const;
+
 interface Parsed {
+  readonly command: (typeof COMMANDS)[number];
+  readonly catalogue: string | undefined;
   readonly help: boolean;
   readonly version: boolean;
   readonly file: string | undefined;
@@ -146,6 +161,7 @@ function parse(argv: readonly string[]): Parsed {
         units: { type: 'string', short: 'u' },
         output: { type: 'string', short: 'o' },
         chart: { type: 'string' },
+        catalogue: { type: 'string', short: 'c' },
         help: { type: 'boolean', short: 'h' },
         version: { type: 'boolean', short: 'v' },
       },
@@ -162,6 +178,18 @@ function parse(argv: readonly string[]): Parsed {
   };
   const help = values['help'] === true;
   const version = values['version'] === true;
+  const first = positionals[0];
+  const command = first === 'select' ? 'select' : 'evaluate';
+  if (first !== undefined && (COMMANDS as readonly string[]).includes(first)) positionals.shift();
+  const catalogue = text('catalogue');
+  if (!help && !version && command === 'select' && catalogue === undefined) {
+    throw new InputError('select needs a pump catalogue: --catalogue <file.json>.');
+  }
+  if (command === 'evaluate' && catalogue !== undefined) {
+    throw new InputError(
+      '--catalogue belongs to select: headflow select <scenario> --catalogue <file>.',
+    );
+  }
   if (!help && !version) {
     if (positionals.length === 0) throw new InputError('no scenario file was given.');
     if (positionals.length > 1) {
@@ -176,6 +204,8 @@ function parse(argv: readonly string[]): Parsed {
     throw new InputError('--output and --chart name the same file.');
   }
   return {
+    command,
+    catalogue,
     help,
     version,
     file: positionals[0],
@@ -259,6 +289,20 @@ export async function runCli(
     }
     const file = args.file as string;
     const design = engine.readScenario(await readText(io, file), file);
+    if (args.command === 'select') {
+      const path = args.catalogue as string;
+      const catalogue = engine.readCatalogue(await readText(io, path), path);
+      const selection = engine.select(design, catalogue);
+      const rendered = engine.renderSelection(selection, args.format, args.units);
+      if (args.output === undefined) io.stdout(rendered);
+      else await writeText(io, args.output, rendered);
+      if (args.chart !== undefined) {
+        await writeText(io, args.chart, engine.selectionChart(design, selection, args.units));
+      }
+      if (selection.ranked[0]?.passed === true) return EXIT.passed;
+      io.stderr('headflow: no pump of the catalogue passes every check (see the report).\n');
+      return EXIT.checkFailed;
+    }
     const report = engine.evaluate(design);
     const rendered = engine.render(report, args.format, args.units);
     if (args.output === undefined) io.stdout(rendered);

@@ -39,4 +39,9 @@ export {
   reportToPlain,
 } from './json';
 export { type MarkdownOptions, renderMarkdown } from './markdown';
+export {
+  renderSelection,
+  SELECTION_FORMAT,
+  type SelectionRenderOptions,
+} from './selection';
 export { renderText, type TextOptions } from './text';

@@ -35,6 +35,12 @@ run(
   },
 );
 run(
+  'select ranks the invented catalogue for canal-lift.json',
+  ['select', example('canal-lift.json'), '--catalogue', example('pump-catalogue.json')],
+  0,
+  (r) => r.stdout.startsWith('Pump selection: Canal lift to hillside tank'),
+);
+run(
   'a missing file is invalid input',
   [join(out, 'missing.json')],
   2,
