@@ -16,19 +16,28 @@ import { readScenario } from '../design/scenario-file';
 import {
   chartSpecFromReport,
   renderChart,
+  renderHtml,
   renderJson,
   renderMarkdown,
   renderText,
 } from '../report/index';
 
 /** Report formats the command writes. */
-export type ReportFormat = 'text' | 'markdown' | 'json';
+export type ReportFormat = 'text' | 'markdown' | 'json' | 'html';
+
+/** How the report is written besides its format. */
+export interface RenderChoice {
+  readonly units: UnitSystem | undefined;
+  /** The short form instead of the full calculation sheet. */
+  readonly summary: boolean;
+}
 
 /** The library functions the command calls. */
 export interface Engine {
   readScenario(json: string, source: string): DesignInput;
-  evaluate(design: DesignInput): DesignReport;
-  render(report: DesignReport, format: ReportFormat, units: UnitSystem | undefined): string;
+  /** `curves`: sample the chart's curves (for `--chart` and the HTML page). */
+  evaluate(design: DesignInput, curves: boolean): DesignReport;
+  render(report: DesignReport, format: ReportFormat, choice: RenderChoice): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
 }
 
@@ -39,11 +48,12 @@ function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
 /** The library itself. */
 export const libraryEngine: Engine = {
   readScenario: (json, source) => readScenario(json, { source }),
-  evaluate: (design) => evaluateDesign(design),
-  render(report, format, units) {
-    const options = unitsOption(units);
+  evaluate: (design, curves) => evaluateDesign(design, { curves }),
+  render(report, format, choice) {
+    const options = { ...unitsOption(choice.units), summary: choice.summary };
     if (format === 'markdown') return renderMarkdown(report, options);
-    if (format === 'json') return renderJson(report, options);
+    if (format === 'json') return renderJson(report, unitsOption(choice.units));
+    if (format === 'html') return renderHtml(report, options);
     return renderText(report, options);
   },
   chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),

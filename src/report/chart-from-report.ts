@@ -4,8 +4,8 @@
  *
  * @module
  */
-import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
-import { displayUnits } from '../design/index';
+import type { DesignReport, SampledCurve, UnitSystem } from '../design/core';
+import { displayUnits } from '../design/core';
 import { argumentError } from '../errors';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
@@ -63,6 +63,15 @@ export function chartSpecFromReport(
 ): ChartSpec {
   const u = displayUnits(chosenUnits(report, options.units));
   const c = report.curves;
+  if (c === undefined) {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      'report.curves',
+      'none',
+      undefined,
+      'a report evaluated with its curves: evaluateDesign(input, { curves: true })',
+    );
+  }
   return {
     title: report.name,
     units: { flow: u.flow, head: u.head },
