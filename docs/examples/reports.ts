@@ -10,7 +10,7 @@ import {
 } from 'headflow/report';
 import { design } from './cooling-loop'; // the DesignInput of docs/examples/cooling-loop.ts
 
-const report = evaluateDesign(design);
+const report = evaluateDesign(design, { curves: true });
 
 // Plain text for a terminal: 80 characters wide, US customary units.
 const text = renderText(report, { units: 'us', width: 80 });

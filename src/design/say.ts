@@ -128,7 +128,7 @@ export function sayIn(system: UnitSystem, style: SymbolStyle = 'ascii'): Say {
   const more = moreUnits(system);
   const sym = (unit: string): string => symbol(unit, style);
   const q = <D extends Dimension>(x: Quantity<D> | number, unit: UnitOf<D>, digits = 4): string =>
-    `${short(to(x as Quantity<D>, unit), digits)} ${sym(unit)}`;
+    Number.isFinite(x) ? `${short(to(x as Quantity<D>, unit), digits)} ${sym(unit)}` : '-';
   return {
     system,
     style,
@@ -143,20 +143,26 @@ export function sayIn(system: UnitSystem, style: SymbolStyle = 'ascii'): Say {
     roughness: (x, d = 3) => q(x, more.roughness, d),
     velocity: (x, d = 3) => q(x, u.velocity, d),
     power: (x, d = 3) => q(x, u.power, d),
-    speed: (x) => `${Math.round(to(x as Quantity<'rotationalSpeed'>, 'rpm'))} rpm`,
+    speed: (x) =>
+      Number.isFinite(x) ? `${Math.round(to(x as Quantity<'rotationalSpeed'>, 'rpm'))} rpm` : '-',
     temperature: (x) => q(x, more.temperature, 4),
     density: (x) => q(x, more.density, 5),
     kinematicViscosity: (x) => q(x, more.kinematicViscosity, 4),
     absolute: (x, d = 4) =>
-      `${short(to(x as Pressure, u.pressure), d)} ${pressureUnit(system, 'absolute')}`,
+      Number.isFinite(x)
+        ? `${short(to(x as Pressure, u.pressure), d)} ${pressureUnit(system, 'absolute')}`
+        : '-',
     gauge: (x, atmosphere, d = 4) =>
-      `${short(to((x - atmosphere) as Pressure, u.pressure), d)} ${pressureUnit(system, 'gauge')}`,
+      Number.isFinite(x - atmosphere)
+        ? `${short(to((x - atmosphere) as Pressure, u.pressure), d)} ${pressureUnit(system, 'gauge')}`
+        : '-',
     specificEnergy: (x) => {
       const perM3 = x / J_PER_KWH;
       const v = system === 'us' ? perM3 * M3_PER_KGAL : perM3;
       return `${short(v, 3)} ${sym(more.specificEnergy)}`;
     },
     motor: (rating, nameplate, unit) => {
+      if (!Number.isFinite(rating) || !Number.isFinite(nameplate)) return '-';
       const own = u.power === 'kW' ? 'kW' : 'hp';
       if (unit === own) return `${short(nameplate)} ${own}`;
       return `${short(to(rating as Power, u.power), 3)} ${own} (${short(nameplate)} ${unit})`;

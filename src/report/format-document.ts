@@ -95,7 +95,7 @@ export function verdictLine(report: DesignReport): string {
   }
   const passes = `${v.passing} of ${plural(v.candidates, 'candidate', 'candidates')} ${v.passing === 1 ? 'passes' : 'pass'}`;
   if (v.passing === 0) {
-    return `${passes}; none is recommended (the best ranked is ${v.recommended ?? DASH})${system}.`;
+    return `No candidate passes (0 of ${v.candidates}); none is recommended (the best ranked is ${v.recommended ?? DASH})${system}.`;
   }
   return `${passes}; recommended: ${v.recommended ?? DASH}${system}.`;
 }
@@ -707,7 +707,7 @@ export function reportBlocks(
           'Fluid',
           `${report.fluid.name} at ${s.temperature(report.fluid.temperature)}, ${s.density(report.fluid.density)} (design case)`,
         ],
-        ['Duty flow', s.flow(report.dutyFlow)],
+        ['Duty flow', `${formatIn(report.dutyFlow, s.units.flow)} ${s.sym(s.units.flow)}`],
         ['Units', unitsLine(s)],
       ],
     },
