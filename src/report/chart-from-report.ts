@@ -28,10 +28,20 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
       );
     }
     const points = c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) }));
-    return c.group === undefined
-      ? { name: c.name, points }
-      : { name: c.name, group: c.group, points };
+    return {
+      name: c.name,
+      ...(c.group === undefined ? {} : { group: c.group }),
+      ...(c.speed === undefined ? {} : { speed: c.speed }),
+      ...(c.maxSpeed === undefined ? {} : { maxSpeed: c.maxSpeed }),
+      points,
+    };
   });
+}
+
+/** The colour group of a candidate: the label its curves carry (`"B (2 in parallel)"`). */
+function groupOf(report: DesignReport, candidate: string): string {
+  const c = report.candidates.find((k) => k.name === candidate);
+  return c !== undefined && c.count > 1 ? `${c.name} (${c.count} in ${c.arrangement})` : candidate;
 }
 
 /**
@@ -77,7 +87,13 @@ export function chartSpecFromReport(
     units: { flow: u.flow, head: u.head },
     pumpCurves: series('curves.pumps', c.pumps),
     systemCurves: series('curves.systems', c.systems),
-    operatingPoints: c.points.map((p) => ({ name: p.name, flow: p.flow, head: p.head })),
+    operatingPoints: c.points.map((p) => ({
+      name: p.name,
+      flow: p.flow,
+      head: p.head,
+      ...(p.candidate === undefined ? {} : { group: groupOf(report, p.candidate) }),
+    })),
+    dutyPoints: (c.dutyPoints ?? []).map((d) => ({ name: d.case, flow: d.flow, head: d.head })),
     preferredRegions: c.preferredRegions.map((r) => ({
       name: r.name,
       minFlow: r.minFlow,
