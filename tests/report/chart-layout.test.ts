@@ -64,8 +64,8 @@ function measure(svg: string): {
   const doc = parser.parse(svg) as Node[];
   const root = doc.find((n) => tagOf(n) === 'svg') as Node;
   const rootAttrs = attrsOf(root);
-  const width = Number(rootAttrs.width);
-  const height = Number(rootAttrs.height);
+  const width = Number(rootAttrs['width']);
+  const height = Number(rootAttrs['height']);
   const plots: Box[] = [];
   const texts: TextItem[] = [];
   const walk = (nodes: Node[], inherited: Record<string, string>): void => {
@@ -73,15 +73,15 @@ function measure(svg: string): {
       const tag = tagOf(n);
       if (tag === undefined || tag === '#text') continue;
       const a = attrsOf(n);
-      if (a.transform !== undefined && tag !== 'text') {
+      if (a['transform'] !== undefined && tag !== 'text') {
         // Groups with a transform hold swatches only; text there would need its offset.
         expect(textContent(n[tag]), `text inside a transformed <${tag}>`).toBe('');
       }
       const style = { ...inherited, ...a };
-      if (tag === 'rect' && (a.class ?? '') === 'plot-area') {
-        const x = Number(a.x);
-        const y = Number(a.y);
-        plots.push({ x0: x, y0: y, x1: x + Number(a.width), y1: y + Number(a.height) });
+      if (tag === 'rect' && (a['class'] ?? '') === 'plot-area') {
+        const x = Number(a['x']);
+        const y = Number(a['y']);
+        plots.push({ x0: x, y0: y, x1: x + Number(a['width']), y1: y + Number(a['height']) });
       }
       if (tag === 'text') {
         const content = textContent(n[tag]);
@@ -90,20 +90,20 @@ function measure(svg: string): {
         const anchor = style['text-anchor'] ?? 'start';
         const shift = anchor === 'middle' ? w / 2 : anchor === 'end' ? w : 0;
         const dy =
-          a.dy === undefined
+          a['dy'] === undefined
             ? 0
-            : a.dy.endsWith('em')
-              ? Number.parseFloat(a.dy) * size
-              : Number(a.dy);
-        const lx = Number(a.x ?? 0) - shift;
-        const ly = Number(a.y ?? 0) + dy;
+            : a['dy'].endsWith('em')
+              ? Number.parseFloat(a['dy']) * size
+              : Number(a['dy']);
+        const lx = Number(a['x'] ?? 0) - shift;
+        const ly = Number(a['y'] ?? 0) + dy;
         const local: Box = { x0: lx, y0: ly - 0.8 * size, x1: lx + w, y1: ly + 0.2 * size };
         let box = local;
-        if (a.transform !== undefined) {
+        if (a['transform'] !== undefined) {
           const t = /translate\(([-\d.]+),\s*([-\d.]+)\)(?:\s*rotate\(([-\d.]+)\))?/.exec(
-            a.transform,
+            a['transform'],
           );
-          expect(t, a.transform).not.toBeNull();
+          expect(t, a['transform']).not.toBeNull();
           const tx = Number(t?.[1]);
           const ty = Number(t?.[2]);
           const angle = Number(t?.[3] ?? 0);
@@ -127,14 +127,14 @@ function measure(svg: string): {
             y1: Math.max(...ys),
           };
         }
-        texts.push({ text: content, cls: a.class ?? '', box });
+        texts.push({ text: content, cls: a['class'] ?? '', box });
         continue;
       }
       const children = n[tag];
       if (Array.isArray(children)) walk(children as Node[], style);
     }
   };
-  walk(root.svg as Node[], rootAttrs);
+  walk(root['svg'] as Node[], rootAttrs);
   return { width, height, plots, texts };
 }
 
@@ -182,7 +182,7 @@ describe('the chart test itself', () => {
       '<text transform="translate(20,100) rotate(-90)" text-anchor="middle">Head (m)</text></svg>';
     const box = measure(svg).texts[0]?.box;
     // 8 characters x 0.56 x 10 = 44.8 tall; 0.8 em to the left of x = 20, 0.2 em to the right.
-    expect(box?.y1 - (box?.y0 ?? 0)).toBeCloseTo(44.8, 9);
+    expect((box?.y1 ?? 0) - (box?.y0 ?? 0)).toBeCloseTo(44.8, 9);
     expect(box?.x0).toBeCloseTo(12, 9);
     expect(box?.x1).toBeCloseTo(22, 9);
   });

@@ -337,9 +337,9 @@ describe('renderChart: the document', () => {
       width: '800',
     });
     // The drawing grows below its legend and key when they need the room.
-    const h = Number(root?.attrs.height);
+    const h = Number(root?.attrs['height']);
     expect(h).toBeGreaterThanOrEqual(600);
-    expect(root?.attrs.viewBox).toBe(`0 0 800 ${root?.attrs.height}`);
+    expect(root?.attrs['viewBox']).toBe(`0 0 800 ${root?.attrs['height']}`);
     expect(els.find((e) => e.tag === 'title')?.text).toBe(sample.title);
     expect(svg).not.toContain('NaN');
   });

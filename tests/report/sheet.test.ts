@@ -8,8 +8,8 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { EXIT, runCli } from '../../src/cli/run';
 import { evaluateDesign, readScenario } from '../../src/design/index';
-import { renderHtml, renderMarkdown, renderText } from '../../src/report/index';
-import { to } from '../../src/units/index';
+import { renderHtml, renderJson, renderMarkdown, renderText } from '../../src/report/index';
+import { si, to } from '../../src/units/index';
 
 const DIR = join(__dirname, '../../docs/examples');
 const FILES = readdirSync(DIR).filter((f) => f.endsWith('.json'));
@@ -99,52 +99,119 @@ describe('every example file speaks one unit system', () => {
   }
 });
 
+/** A printed cell (4 significant digits) against the value: relative error at most 5e-4. */
+function expectPrinted(cell: string | undefined, value: number, what: string): void {
+  const printed = Number(String(cell).replace(/,/g, ''));
+  const tolerance = Math.max(5e-4 * Math.abs(value), 5e-7);
+  expect(Math.abs(printed - value), `${what}: printed ${cell}, value ${value}`).toBeLessThanOrEqual(
+    tolerance,
+  );
+}
+
+/** The cells of the rows starting with `name` (cells split at two spaces or more). */
+function rowsOf(text: string, name: string): string[][] {
+  return text
+    .split('\n')
+    .filter((l) => l.startsWith(`${name} `))
+    .map((l) =>
+      l
+        .slice(name.length)
+        .trim()
+        .split(/\s{2,}/),
+    );
+}
+
 describe('numbers read back from the sheet match the report object', () => {
   const file = join(DIR, 'canal-lift.json');
   const report = evaluateDesign(readScenario(readFileSync(file, 'utf8')));
-  const text = renderText(report, { width: 140 });
-  it('the duty table: static head, losses and total head of every case, in m', () => {
+  const siText = renderText(report, { width: 160 });
+  const usText = renderText(report, { units: 'us', width: 160 });
+
+  it('the duty table: heads, NPSH available and the pump outlet pressure, abs and gauge', () => {
     for (const d of report.duty) {
-      const line = text.split('\n').find((l) => l.startsWith(`${d.case} `) && /\d/.test(l));
-      const cells = (line ?? '')
-        .slice(d.case.length)
-        .trim()
-        .split(/\s{2,}/);
-      // The first table that starts with the case's name is the liquid table; find the duty row.
-      const dutyLine = text
-        .split('\n')
-        .filter((l) => l.startsWith(d.case))
-        .map((l) =>
-          l
-            .slice(d.case.length)
-            .trim()
-            .split(/\s{2,}/),
-        )
-        .find((c) => Math.abs(Number(c[2]) - d.head) < 0.01);
-      expect(cells.length).toBeGreaterThan(0);
-      expect(dutyLine, d.case).toBeDefined();
-      expect(Number(dutyLine?.[0])).toBeCloseTo(d.staticHead, 1);
-      expect(Number(dutyLine?.[1])).toBeCloseTo(d.lossHead, 1);
+      // The liquid, the ends, then the duty: the duty row is the third starting with the case.
+      const cells = rowsOf(siText, d.case)[2];
+      expectPrinted(cells?.[0], d.staticHead, 'static head');
+      expectPrinted(cells?.[1], d.lossHead, 'losses');
+      expectPrinted(cells?.[2], d.head, 'total head');
+      expectPrinted(cells?.[3], d.npshAvailable ?? Number.NaN, 'NPSHa');
+      expectPrinted(cells?.[4], (d.pumpDischargePressure ?? 0) / 1000, 'outlet kPa abs');
+      expectPrinted(
+        cells?.[5],
+        ((d.pumpDischargePressure ?? 0) - report.atmosphere) / 1000,
+        'outlet kPa gauge',
+      );
+      const usCells = rowsOf(usText, d.case)[2];
+      expectPrinted(usCells?.[2], to(d.head, 'ft'), 'total head, ft');
+      expectPrinted(usCells?.[4], to(d.pumpDischargePressure ?? si<'pressure'>(0), 'psi'), 'psia');
     }
   });
-  it('the operating points of the recommended candidate in US units', () => {
-    const us = renderText(report, { units: 'us', width: 140 });
-    const c = report.candidates[0];
-    for (const r of c?.cases ?? []) {
-      const rows = us
-        .split('\n')
-        .filter((l) => l.startsWith(r.case))
-        .map((l) =>
-          l
-            .slice(r.case.length)
-            .trim()
-            .split(/\s{2,}/),
-        );
-      const match = rows.find((cells) => Number(cells[0]) === Math.round(to(r.speed ?? 0, 'rpm')));
-      expect(match, r.case).toBeDefined();
-      expect(Number(match?.[1])).toBeCloseTo(to(r.flow ?? 0, 'gal/min'), 0);
-      expect(Number(match?.[2])).toBeCloseTo(to(r.head ?? 0, 'ft'), 1);
+
+  it('the run losses and the NPSH terms of every case', () => {
+    for (const d of report.duty) {
+      for (const r of d.runs) {
+        // Every run row of the loss tables; the one of this case is at the case's position.
+        const k = report.duty.indexOf(d);
+        const cells = rowsOf(siText, r.name).filter((c) => c.length === 9)[k];
+        expectPrinted(cells?.[1], to(r.velocity, 'm/s'), `${r.name} velocity`);
+        expectPrinted(cells?.[2], Math.round(r.reynolds), `${r.name} Re`);
+        expect(cells?.[3]).toBe(r.regime);
+        expect(Math.abs(Number(cells?.[4]) - r.frictionFactor)).toBeLessThanOrEqual(5e-5);
+        expectPrinted(cells?.[5], r.pipeLoss, `${r.name} pipe loss`);
+        expectPrinted(cells?.[6], r.fittingsLoss, `${r.name} fittings loss`);
+        expectPrinted(cells?.[8], r.totalLoss, `${r.name} total loss`);
+      }
+      const t = d.npshTerms;
+      const cells = rowsOf(siText, d.case)[3];
+      expectPrinted(cells?.[0], t?.surfacePressureHead ?? Number.NaN, 'surface pressure head');
+      expectPrinted(cells?.[1], t?.vaporPressureHead ?? Number.NaN, 'vapour pressure head');
+      expectPrinted(cells?.[2], t?.staticHeight ?? Number.NaN, 'static height');
+      expectPrinted(cells?.[3], t?.suctionLoss ?? Number.NaN, 'suction loss');
+      expectPrinted(cells?.[5], t?.total ?? Number.NaN, 'NPSHa');
+      // The terms add up to the NPSH available the checks use.
+      const sum =
+        (t?.surfacePressureHead ?? 0) -
+        (t?.vaporPressureHead ?? 0) +
+        (t?.staticHeight ?? 0) -
+        (t?.suctionLoss ?? 0) +
+        (t?.velocityHead ?? 0);
+      expect(Math.abs(sum - (d.npshAvailable ?? 0))).toBeLessThan(1e-9);
     }
+  });
+
+  it('the operating points of every candidate, in US units', () => {
+    for (const c of report.candidates) {
+      for (const r of c.cases) {
+        const match = rowsOf(usText, r.case).find(
+          (cells) =>
+            Number(cells[0]) === Math.round(to(r.speed ?? si<'rotationalSpeed'>(0), 'rpm')),
+        );
+        expect(match, `${c.name} / ${r.case}`).toBeDefined();
+        expectPrinted(match?.[1], to(r.flow ?? si<'flow'>(0), 'gal/min'), 'flow');
+        expectPrinted(match?.[2], to(r.head ?? si<'length'>(0), 'ft'), 'head');
+        expectPrinted(match?.[4], to(r.shaftPower ?? si<'power'>(0), 'hp'), 'shaft power');
+      }
+    }
+  });
+
+  it('the JSON carries the same numbers in its units', () => {
+    const doc = JSON.parse(renderJson(report, { units: 'us' }));
+    const d0 = report.duty[0];
+    expect(doc.report.duty[0].pumpDischargePressure.absolute.unit).toBe('psi');
+    expectPrinted(
+      String(doc.report.duty[0].pumpDischargePressure.absolute.value),
+      to(d0?.pumpDischargePressure ?? si<'pressure'>(0), 'psi'),
+      'JSON psia',
+    );
+    expect(doc.report.verdict).toEqual({
+      candidates: 2,
+      passing: 1,
+      recommended: 'pump B with drive',
+      passed: true,
+    });
+    expect(doc.report.fluid.temperature.unit).toBe('degF');
+    // 15 degC = 59 degF.
+    expect(doc.report.fluid.temperature.value).toBeCloseTo(59, 9);
   });
 });
 
