@@ -780,12 +780,13 @@ describe('the guide (docs/reports.md)', () => {
       c.map((x) => (typeof x === 'string' ? x : JSON.stringify(x))).join(' '),
     );
     log.mockRestore();
-    // The first lines come from the cooling-loop example it imports; the guide prints the last five.
-    expect(lines.slice(-5)).toEqual([
+    // The first lines come from the cooling-loop example it imports; the guide prints the last six.
+    expect(lines.slice(-6)).toEqual([
       'Pump selection report: process cooling loop',
       '# Pump selection report: process cooling loop',
       'headflow-report/2',
       '{"value":105,"unit":"m3/h"}',
+      'true',
       'true',
     ]);
   });
