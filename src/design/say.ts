@@ -66,7 +66,8 @@ const MORE_SI: MoreUnits = {
 const MORE_US: MoreUnits = {
   temperature: 'degF',
   density: 'lb/ft3',
-  kinematicViscosity: 'ft2/s',
+  // Centistokes: the unit US pump practice quotes viscosity in (ANSI/HI 9.6.7 tables use cSt).
+  kinematicViscosity: 'cSt',
   diameter: 'in',
   roughness: 'in',
   specificEnergy: 'kWh/kgal',

@@ -656,7 +656,13 @@ function inputBlocks(report: DesignReport, s: Say): Block[] {
         'Pump location',
         loc === undefined
           ? 'not given (NPSH and line velocities are not checked)'
-          : `impeller eye at ${s.length(loc.elevation)}; suction line: ${loc.suctionRuns === 1 ? 'the first run' : `the first ${loc.suctionRuns} runs`}`,
+          : `impeller eye at ${s.length(loc.elevation)}; suction line: ${
+              loc.suctionRuns === 0
+                ? 'none (the pump takes from the suction end)'
+                : loc.suctionRuns === 1
+                  ? 'the first run'
+                  : `the first ${loc.suctionRuns} runs`
+            }`,
       ],
       [
         'Atmosphere',

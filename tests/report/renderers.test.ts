@@ -729,7 +729,7 @@ describe('JSON report', () => {
         'kWh',
         'degF',
         'lb/ft3',
-        'ft2/s',
+        'cSt',
       ]),
     );
   });

@@ -29,6 +29,7 @@ const US_SYMBOLS = [
   'lb/ft3',
   'ft/s',
   'ft2/s',
+  'cSt',
   'kWh/kgal',
 ];
 const SI_SYMBOLS = [
