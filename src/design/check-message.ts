@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { argumentError } from '../errors';
+import { guardOneOf, guardRecord, guardString } from '../guards';
 import { type Say, type SymbolStyle, sayIn, short } from './say';
 import type { Check, UnitSystem } from './types';
 
@@ -127,8 +127,13 @@ export function checkMessage(
   units: UnitSystem,
   style: SymbolStyle = 'ascii',
 ): string {
-  if (units !== 'si' && units !== 'us') {
-    throw argumentError('INVALID_ARGUMENT', 'units', units, undefined, "'si' or 'us'");
-  }
-  return message({ ...check, words: check.words ?? {} }, sayIn(units, style));
+  const c = guardRecord('check', check);
+  guardString('check.id', c['id']);
+  const system = guardOneOf('units', units, ['si', 'us'] as const);
+  const symbols = guardOneOf('style', style, ['ascii', 'unicode'] as const);
+  const values = c['values'] === undefined ? {} : guardRecord('check.values', c['values']);
+  const words = c['words'] === undefined ? {} : guardRecord('check.words', c['words']);
+  const known = { ...check, values: values as Check['values'], words: words as Check['words'] };
+  const said = message(known, sayIn(system, symbols));
+  return typeof said === 'string' ? said : '';
 }

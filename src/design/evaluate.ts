@@ -4,7 +4,7 @@
  * @module
  */
 import { argumentError, checkFraction, checkPositive, HeadflowError } from '../errors';
-import { guardBoolean, guardRange } from '../guards';
+import { guardBoolean, guardOptions, guardRange } from '../guards';
 import { fitting, fittingK, kFromCv, kFromKv } from '../losses/index';
 import { type PipeDimensions, material as pipeMaterial } from '../pipes/index';
 import {
@@ -1220,10 +1220,8 @@ export function evaluateDesign(
   input: DesignInput,
   options: EvaluateOptions | null = {},
 ): DesignReport {
-  const wantCurves =
-    options === null || options.curves === undefined
-      ? false
-      : guardBoolean('options.curves', options.curves);
+  const o = guardOptions<EvaluateOptions>('options', options);
+  const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
   const units = input.units ?? 'si';
   if (units !== 'si' && units !== 'us') {

@@ -5,7 +5,7 @@
  * @module
  */
 import type { DesignReport, UnitSystem } from '../design/core';
-import { guardBoolean } from '../guards';
+import { guardBoolean, guardOptions } from '../guards';
 import { renderChart } from './chart';
 import { chartSpecFromReport } from './chart-from-report';
 import { type Block, type Column, reportBlocks } from './format-document';
@@ -142,7 +142,7 @@ function blockHtml(block: Block): string {
  * ```
  */
 export function renderHtml(report: DesignReport, options: HtmlOptions | null = {}): string {
-  const o = options ?? {};
+  const o = guardOptions<HtmlOptions>('options', options) as HtmlOptions;
   const system = chosenUnits(report, o.units);
   const summary = o.summary === undefined ? false : guardBoolean('options.summary', o.summary);
   const wantChart =
