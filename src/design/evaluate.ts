@@ -111,9 +111,10 @@ interface Candidate {
   readonly setHead: (h: number) => number;
 }
 
-/** Units of the messages stored with the checks (the report's); set per evaluation. */
-let messageUnits: UnitSystem = 'si';
-
+/**
+ * A check without its message: `evaluateDesign` writes every message at the end, in the
+ * report's units, from the values and words (see {@link withMessages}).
+ */
 function check(
   id: string,
   severity: Check['severity'],
@@ -123,8 +124,12 @@ function check(
   source: string,
   words: Record<string, string> = {},
 ): Check {
-  const c = { id, severity, candidate, case: caseName, message: '', values, words, source };
-  return { ...c, message: checkMessage(c, messageUnits) };
+  return { id, severity, candidate, case: caseName, message: '', values, words, source };
+}
+
+/** The checks with their messages written in a unit system. */
+function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
+  return checks.map((k) => ({ ...k, message: checkMessage(k, units) }));
 }
 
 function resolveLimits(input: DesignInput): Limits {
@@ -709,7 +714,7 @@ function runCase(
       reason.words,
     );
     checks.push(k);
-    return { ...empty, failure: k.message };
+    return { ...empty, failure: checkMessage(k, limits.units) };
   }
   const flow = c.setFlow(q);
   const head = c.setHead(pump.head(q as Flow));
@@ -993,7 +998,7 @@ function evaluateCandidate(
       motorSeries: series,
       bep: c.pump.bestEfficiencyPoint,
     },
-    checks,
+    checks: withMessages(checks, limits.units),
     passed: !checks.some((k) => k.severity === 'error'),
   };
 }
@@ -1227,7 +1232,6 @@ export function evaluateDesign(
   if (units !== 'si' && units !== 'us') {
     throw argumentError('INVALID_ARGUMENT', 'units', units, undefined, "'si' or 'us'");
   }
-  messageUnits = units;
   const atmosphere =
     input.atmosphere === undefined
       ? STANDARD_ATMOSPHERE
@@ -1331,7 +1335,7 @@ export function evaluateDesign(
     atmosphere,
     duty,
     candidates: ranked,
-    checks: systemChecks,
+    checks: withMessages(systemChecks, units),
     cautions: CAUTIONS,
     passed,
     curves,

@@ -14,6 +14,7 @@ import {
   pumpsInSeries,
   speedForFlow,
 } from '../../src/pumps';
+import { renderText } from '../../src/report/index';
 import { systemCurve, systemScenarios } from '../../src/system';
 import { type Flow, q, STANDARD_ATMOSPHERE, to } from '../../src/units';
 import { expectHeadflowError, expectRelative } from '../helpers/expect';
@@ -228,6 +229,13 @@ describe('checks', () => {
     const failed = r.candidates[1];
     expect(failed?.passed).toBe(false);
     expect(failed?.cases[0]?.failure).toContain('cannot lift the liquid');
+    // With no operating point in any case there is no duty to size a motor for.
+    expect(failed?.dutyOnlyMotor).toBeUndefined();
+    const text = renderText(r, { width: 200 });
+    expect(text).toContain('Duty-only motor per pump: - (not sized: no operating point)');
+    expect(text).not.toContain('No operating point: No operating point');
+    // Said once under the candidate and once among the checks.
+    expect(text.split('No operating point:').length - 1).toBe(2);
     expect(
       failed?.checks.some((k) => k.id === 'no-operating-point' && k.severity === 'error'),
     ).toBe(true);

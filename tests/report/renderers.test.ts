@@ -718,19 +718,7 @@ describe('JSON report', () => {
     walk(usDoc);
     // kW only as the IEC nameplate of a motor, in brackets after its rating in hp.
     expect(new Set(seen)).toEqual(
-      new Set([
-        'gal/min',
-        'ft',
-        'rpm',
-        'hp',
-        'kW',
-        'ft/s',
-        'psi',
-        'kWh',
-        'degF',
-        'lb/ft3',
-        'cSt',
-      ]),
+      new Set(['gal/min', 'ft', 'rpm', 'hp', 'kW', 'ft/s', 'psi', 'kWh', 'degF', 'lb/ft3', 'cSt']),
     );
   });
 });

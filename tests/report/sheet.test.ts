@@ -269,6 +269,14 @@ describe('the verdict and the exit code', () => {
     expect(c.out()).toContain('<svg');
     expect(c.out()).not.toMatch(/(src|href)="https?:/);
   });
+  it('the operating-point table of one pump fits 100 columns: NPSH ratio beside the speed', () => {
+    const report = evaluateDesign(readScenario(readFileSync(join(DIR, 'canal-lift.json'), 'utf8')));
+    const text = renderText(report);
+    const header = text.split('\n').filter((l) => l.startsWith('Case') && l.includes('(rpm)'));
+    expect(header.length).toBe(2);
+    for (const h of header) expect(h).toContain('ratio');
+    for (const l of text.split('\n')) expect(l.length).toBeLessThanOrEqual(100);
+  });
   it('--summary gives the short form', async () => {
     const c = io({ 'a.json': JSON.stringify(base) });
     expect(await runCli(['a.json', '--summary'], c.io)).toBe(EXIT.passed);
