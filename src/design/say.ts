@@ -95,18 +95,13 @@ export interface Say {
   flow(x: number, digits?: number): string;
   head(x: number, digits?: number): string;
   length(x: number, digits?: number): string;
-  diameter(x: number, digits?: number): string;
-  roughness(x: number, digits?: number): string;
   velocity(x: number, digits?: number): string;
   power(x: number, digits?: number): string;
   speed(x: number): string;
   temperature(x: number): string;
   density(x: number): string;
-  kinematicViscosity(x: number): string;
   /** An absolute pressure, marked absolute (`101.3 kPa abs`, `14.7 psia`). */
   absolute(x: number, digits?: number): string;
-  /** A gauge pressure (absolute minus the atmosphere), marked gauge (`0 kPa gauge`, `12 psig`). */
-  gauge(x: number, atmosphere: number, digits?: number): string;
   /** Energy per volume pumped (J/m3 in). */
   specificEnergy(x: number): string;
   /**
@@ -140,22 +135,15 @@ export function sayIn(system: UnitSystem, style: SymbolStyle = 'ascii'): Say {
     flow: (x, d = 4) => q(x, u.flow, d),
     head: (x, d = 3) => q(x, u.head, d),
     length: (x, d = 4) => q(x, u.length, d),
-    diameter: (x, d = 4) => q(x, more.diameter, d),
-    roughness: (x, d = 3) => q(x, more.roughness, d),
     velocity: (x, d = 3) => q(x, u.velocity, d),
     power: (x, d = 3) => q(x, u.power, d),
     speed: (x) =>
       Number.isFinite(x) ? `${Math.round(to(x as Quantity<'rotationalSpeed'>, 'rpm'))} rpm` : '-',
     temperature: (x) => q(x, more.temperature, 4),
     density: (x) => q(x, more.density, 5),
-    kinematicViscosity: (x) => q(x, more.kinematicViscosity, 4),
     absolute: (x, d = 4) =>
       Number.isFinite(x)
         ? `${short(to(x as Pressure, u.pressure), d)} ${pressureUnit(system, 'absolute')}`
-        : '-',
-    gauge: (x, atmosphere, d = 4) =>
-      Number.isFinite(x - atmosphere)
-        ? `${short(to((x - atmosphere) as Pressure, u.pressure), d)} ${pressureUnit(system, 'gauge')}`
         : '-',
     specificEnergy: (x) => {
       const perM3 = x / J_PER_KWH;

@@ -49,6 +49,13 @@ describe('renderHtml', () => {
     const body = /<main>([\s\S]*)<\/main>/.exec(out)?.[1] ?? '';
     expect(XMLValidator.validate(`<main>${body.replace(/<br>/g, '<br/>')}</main>`)).toBe(true);
   });
+  it('replaces what HTML cannot carry and keeps surrogate pairs', () => {
+    const out = renderHtml(
+      { ...REPORT, name: 'a\u0001b\ud800c\udc00d \u{1F600}' },
+      { chart: false },
+    );
+    expect(out).toContain('Pump selection report: a\ufffdb\ufffdc\ufffdd \u{1F600}');
+  });
   it('draws the chart only when the report has its curves, or refuses when asked for it', () => {
     const bare = { ...REPORT, curves: undefined };
     expect(renderHtml(bare)).not.toContain('<svg');
