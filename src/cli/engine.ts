@@ -25,19 +25,18 @@ import {
 /** Report formats the command writes. */
 export type ReportFormat = 'text' | 'markdown' | 'json' | 'html';
 
-/** How the report is written besides its format. */
-export interface RenderChoice {
-  readonly units: UnitSystem | undefined;
-  /** The short form instead of the full calculation sheet. */
-  readonly summary: boolean;
-}
-
 /** The library functions the command calls. */
 export interface Engine {
   readScenario(json: string, source: string): DesignInput;
-  /** `curves`: sample the chart's curves (for `--chart` and the HTML page). */
-  evaluate(design: DesignInput, curves: boolean): DesignReport;
-  render(report: DesignReport, format: ReportFormat, choice: RenderChoice): string;
+  /** `curves`: sample the chart's curves (for `--chart` and the HTML page); default false. */
+  evaluate(design: DesignInput, curves?: boolean): DesignReport;
+  /** `summary`: the short form instead of the full calculation sheet; default false. */
+  render(
+    report: DesignReport,
+    format: ReportFormat,
+    units: UnitSystem | undefined,
+    summary?: boolean,
+  ): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
 }
 
@@ -48,11 +47,11 @@ function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
 /** The library itself. */
 export const libraryEngine: Engine = {
   readScenario: (json, source) => readScenario(json, { source }),
-  evaluate: (design, curves) => evaluateDesign(design, { curves }),
-  render(report, format, choice) {
-    const options = { ...unitsOption(choice.units), summary: choice.summary };
+  evaluate: (design, curves = false) => evaluateDesign(design, { curves }),
+  render(report, format, units, summary = false) {
+    const options = { ...unitsOption(units), summary };
     if (format === 'markdown') return renderMarkdown(report, options);
-    if (format === 'json') return renderJson(report, unitsOption(choice.units));
+    if (format === 'json') return renderJson(report, unitsOption(units));
     if (format === 'html') return renderHtml(report, options);
     return renderText(report, options);
   },

@@ -269,10 +269,7 @@ export async function runCli(
     const file = args.file as string;
     const design = engine.readScenario(await readText(io, file), file);
     const report = engine.evaluate(design, args.chart !== undefined || args.format === 'html');
-    const rendered = engine.render(report, args.format, {
-      units: args.units,
-      summary: args.summary,
-    });
+    const rendered = engine.render(report, args.format, args.units, args.summary);
     if (args.output === undefined) io.stdout(rendered);
     else await writeText(io, args.output, rendered);
     if (args.chart !== undefined) await writeText(io, args.chart, engine.chart(report, args.units));

@@ -154,7 +154,7 @@ describe('headflow <file>: a design that fails a check', () => {
   });
 
   it('counts several failed checks', async () => {
-    const report = libraryEngine.evaluate(libraryEngine.readScenario(failingFile(), 'x'), false);
+    const report = libraryEngine.evaluate(libraryEngine.readScenario(failingFile(), 'x'));
     const failing = {
       ...libraryEngine,
       evaluate: () => ({
