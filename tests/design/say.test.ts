@@ -29,7 +29,7 @@ describe('sayIn', () => {
   });
   it('motors: the report unit first, the other series nameplate in brackets', () => {
     // NEMA 60 hp = 44.74 kW; IEC 37 kW = 49.62 hp (hp = 745.69987 W).
-    expect(sayIn('si').motor(60 * 745.69987158227022, 60, 'hp')).toBe('44.7 kW (60 hp)');
+    expect(sayIn('si').motor(q(60, 'hp'), 60, 'hp')).toBe('44.7 kW (60 hp)');
     expect(sayIn('us').motor(37_000, 37, 'kW')).toBe('49.6 hp (37 kW)');
     expect(sayIn('si').motor(37_000, 37, 'kW')).toBe('37 kW');
     expect(sayIn('us').motor(Number.NaN, 60, 'hp')).toBe('-');
