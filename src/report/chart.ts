@@ -186,38 +186,29 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     pumpStyle.set(s, { dash: isTop ? '' : speedDash(k), width: isTop ? 2.4 : 1.6, label });
   }
 
-  // --- legend: grouped by candidate and by operating case
+  // --- legend: grouped by candidate (each group, then each curve without a group) and case
   const candidateEntries: Entry[] = [];
-  const groupKeys = [
-    ...groups,
-    ...spec.pumpCurves.filter((s) => s.group === undefined).map((s) => s.name),
-  ];
-  const ungroupedEff = spec.efficiencyCurves.filter((s) => s.group === undefined);
-  const ungroupedNpsh = spec.npshRequired.filter((s) => s.group === undefined);
-  const ungroupedBands = spec.preferredRegions.filter((b) => b.group === undefined);
-  for (const g of groupKeys) {
-    const pumps = spec.pumpCurves.filter(
-      (s) => (s.group ?? s.name) === g && (s.group !== undefined || !groups.includes(s.name)),
-    );
-    const first = pumps[0] ?? spec.efficiencyCurves.find((s) => s.group === g);
-    const c = colour(
-      first === undefined
-        ? groups.indexOf(g)
-        : hue(first, spec.pumpCurves.indexOf(first as ChartSeries)),
-    );
+  const groupHeading = (name: string, c: string): void => {
     candidateEntries.push({
       swatch: `<rect x="6" y="-6" width="12" height="12" fill="${c}"/>`,
-      text: g,
+      text: name,
       bold: true,
     });
-    for (const s of pumps) {
-      const st = pumpStyle.get(s);
-      candidateEntries.push({
-        swatch: lineSwatch(c, st?.dash ?? '', st?.width ?? 2),
-        text: `head at ${st?.label ?? s.name}`,
-        title: s.name,
-      });
-    }
+  };
+  const pumpEntry = (s: ChartSeries, c: string): void => {
+    const st = pumpStyle.get(s);
+    candidateEntries.push({
+      swatch: lineSwatch(c, st?.dash ?? '', st?.width ?? 2),
+      text: `head at ${st?.label ?? s.name}`,
+      title: s.name,
+    });
+  };
+  const bandSwatch = (c: string): string =>
+    `<rect x="0" y="-3" width="24" height="${LANE - 1}" fill="${c}"/>`;
+  groups.forEach((g, k) => {
+    const c = colour(k);
+    groupHeading(g, c);
+    for (const s of spec.pumpCurves) if (s.group === g) pumpEntry(s, c);
     if (spec.efficiencyCurves.some((s) => s.group === g)) {
       candidateEntries.push({ swatch: lineSwatch(c, '1 3'), text: 'efficiency (right axis)' });
     }
@@ -226,26 +217,33 @@ export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string
     }
     if (spec.preferredRegions.some((b) => b.group === g)) {
       candidateEntries.push({
-        swatch: `<rect x="0" y="-3" width="24" height="${LANE - 1}" fill="${c}"/>`,
+        swatch: bandSwatch(c),
         text: 'preferred operating region (bar along the top)',
       });
     }
-  }
-  ungroupedEff.forEach((s, i) => {
+  });
+  // Curves without a group keep the colour of their position in their own list.
+  spec.pumpCurves.forEach((s, i) => {
+    if (s.group === undefined) pumpEntry(s, colour(hue(s, i)));
+  });
+  spec.efficiencyCurves.forEach((s, i) => {
+    if (s.group !== undefined) return;
     candidateEntries.push({
       swatch: lineSwatch(colour(hue(s, i)), '1 3'),
       text: `${s.name}: efficiency`,
     });
   });
-  ungroupedNpsh.forEach((s, i) => {
+  spec.npshRequired.forEach((s, i) => {
+    if (s.group !== undefined) return;
     candidateEntries.push({
       swatch: lineSwatch(colour(hue(s, i)), ''),
       text: `${s.name}: NPSH required`,
     });
   });
-  ungroupedBands.forEach((b, i) => {
+  spec.preferredRegions.forEach((b, i) => {
+    if (b.group !== undefined) return;
     candidateEntries.push({
-      swatch: `<rect x="0" y="-3" width="24" height="${LANE - 1}" fill="${colour(hue(b, i))}"/>`,
+      swatch: bandSwatch(colour(hue(b, i))),
       text: `${b.name}: preferred operating region`,
     });
   });

@@ -102,6 +102,9 @@ if (!HAVE && CI) {
     });
   });
 } else if (!HAVE) {
+  console.warn(
+    `HTML report in Chromium: skipped, no Chromium at ${CHROMIUM} (apt-get install -y chromium, or set CHROMIUM_PATH); under CI this fails.`,
+  );
   describe('HTML report in Chromium', () => {
     it.skip(`skipped: no Chromium at ${CHROMIUM} (apt-get install -y chromium, or set CHROMIUM_PATH)`, () => {});
   });
