@@ -75,6 +75,10 @@ describe('examples run and print what their comments say', () => {
     const svg = read('.demo/canal-lift.svg');
     expect(svg.startsWith('<?xml') || svg.startsWith('<svg')).toBe(true);
     expect(svg.trimEnd().endsWith('</svg>')).toBe(true);
+    expect(read('.demo/canal-lift.html').startsWith('<!doctype html>')).toBe(true);
+    // The README quotes the sheet's first lines: they must be what the demo prints.
+    const head = text.split('\n').slice(0, 10).join('\n');
+    expect(read('README.md')).toContain(head);
   });
 });
 
