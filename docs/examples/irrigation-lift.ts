@@ -100,7 +100,7 @@ export const design: DesignInput = {
   energyPrice: { perKWh: 0.16, currency: 'EUR' },
 };
 
-export const report = evaluateDesign(design);
+export const report = evaluateDesign(design, { curves: true });
 
 for (const c of report.candidates) {
   const kWh = c.energy?.kWh ?? 0;

@@ -16,6 +16,7 @@ import { readScenario } from '../design/scenario-file';
 import {
   chartSpecFromReport,
   renderChart,
+  renderHtml,
   renderJson,
   renderMarkdown,
   renderSelection,
@@ -24,19 +25,26 @@ import {
 import { type PumpCatalogue, readCatalogue, type Selection, selectPumps } from '../select/index';
 
 /** Report formats the command writes. */
-export type ReportFormat = 'text' | 'markdown' | 'json';
+export type ReportFormat = 'text' | 'markdown' | 'json' | 'html';
 
 /** The library functions the command calls. */
 export interface Engine {
   readScenario(json: string, source: string): DesignInput;
-  evaluate(design: DesignInput): DesignReport;
-  render(report: DesignReport, format: ReportFormat, units: UnitSystem | undefined): string;
+  /** `curves`: sample the chart's curves (for `--chart` and the HTML page); default false. */
+  evaluate(design: DesignInput, curves?: boolean): DesignReport;
+  /** `summary`: the short form instead of the full calculation sheet; default false. */
+  render(
+    report: DesignReport,
+    format: ReportFormat,
+    units: UnitSystem | undefined,
+    summary?: boolean,
+  ): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
   readCatalogue(json: string, source: string): PumpCatalogue;
   select(design: DesignInput, catalogue: PumpCatalogue): Selection;
   renderSelection(
     selection: Selection,
-    format: ReportFormat,
+    format: Exclude<ReportFormat, 'html'>,
     units: UnitSystem | undefined,
   ): string;
   /** The chart of the design with the leading passing ways of a selection as candidates. */
@@ -53,11 +61,12 @@ function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
 /** The library itself. */
 export const libraryEngine: Engine = {
   readScenario: (json, source) => readScenario(json, { source }),
-  evaluate: (design) => evaluateDesign(design),
-  render(report, format, units) {
-    const options = unitsOption(units);
+  evaluate: (design, curves = false) => evaluateDesign(design, { curves }),
+  render(report, format, units, summary = false) {
+    const options = { ...unitsOption(units), summary };
     if (format === 'markdown') return renderMarkdown(report, options);
-    if (format === 'json') return renderJson(report, options);
+    if (format === 'json') return renderJson(report, unitsOption(units));
+    if (format === 'html') return renderHtml(report, options);
     return renderText(report, options);
   },
   chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),
@@ -68,7 +77,10 @@ export const libraryEngine: Engine = {
   selectionChart(design, selection, units) {
     const leading = selection.ranked.filter((e) => e.passed).slice(0, CHARTED);
     const shown = leading.length > 0 ? leading : selection.ranked.slice(0, 1);
-    const report = evaluateDesign({ ...design, candidates: shown.map((e) => e.candidate) });
+    const report = evaluateDesign(
+      { ...design, candidates: shown.map((e) => e.candidate) },
+      { curves: true },
+    );
     return renderChart(chartSpecFromReport(report, unitsOption(units)));
   },
 };

@@ -13,9 +13,9 @@ import { type Engine, libraryEngine, type ReportFormat } from './engine';
 
 /** Exit codes of the command. */
 export const EXIT = {
-  /** The report was written and the design passed (the report's `passed`). */
+  /** The report was written and the recommended candidate passes every check (`report.passed`). */
   passed: 0,
-  /** The report was written and the design did not pass: a check failed with an error. */
+  /** The report was written and no candidate passes (or a check of the system itself failed). */
   checkFailed: 1,
   /** The input could not be used: bad arguments, a file that cannot be read or is not a design. */
   invalidInput: 2,
@@ -43,7 +43,7 @@ export interface CliOptions {
   readonly engine?: Engine;
 }
 
-const FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json'];
+const FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json', 'html'];
 const UNIT_SYSTEMS: readonly UnitSystem[] = ['si', 'us'];
 
 /** The text of `headflow --help`. */
@@ -58,8 +58,12 @@ duty, each with its full impeller throttled, trimmed, or on a drive, by life-cyc
 the catalogue has prices (else by energy); the scenario's own candidates are not used.
 
 Options:
-  -f, --format <text|markdown|json>  report format (default: text)
-  -u, --units <si|us>                units of the report (default: the file's "units", else si)
+  -f, --format <text|markdown|json|html>
+                                     report format (default: text, the full calculation
+                                     sheet; html: one self-contained page with the chart)
+  -u, --units <si|us>                units of everything the report shows (default: the
+                                     file's "units", else si)
+  -s, --summary                      the short form: verdict, duty, candidates, checks
   -o, --output <file>                write the report to a file instead of standard output
       --chart <file.svg>             also write the SVG chart of the curves (select: the
                                      three leading passing ways)
@@ -68,11 +72,10 @@ Options:
   -v, --version                      print the version
 
 Exit codes:
-  0  the report was written and every check passed (no check is an error); select: the
-     leading way passes every check
-  1  the report was written and at least one check failed: a system check, or a
-     candidate's (the ranking still lists the passing candidates first); select: no
-     way passes
+  0  the report was written and the recommended (first-ranked) candidate passes every
+     check; other candidates may fail (with no candidates: the system's checks pass); select: the leading way passes every check
+  1  the report was written and no candidate passes every check (or a check of the
+     system itself failed); select: no way passes
   2  the input could not be used (arguments, or a file that is missing or not a design)
   3  an internal error (please report it)
 
@@ -102,6 +105,7 @@ interface Parsed {
   readonly units: UnitSystem | undefined;
   readonly output: string | undefined;
   readonly chart: string | undefined;
+  readonly summary: boolean;
 }
 
 function pick<T extends string>(
@@ -117,7 +121,7 @@ function pick<T extends string>(
 }
 
 /** The long options of the command, for "did you mean". */
-const LONG_OPTIONS = ['format', 'units', 'output', 'chart', 'help', 'version'] as const;
+const LONG_OPTIONS = ['format', 'units', 'summary', 'output', 'chart', 'help', 'version'] as const;
 
 /** Edit distance between two short words (insertions, deletions, substitutions). */
 function distance(a: string, b: string): number {
@@ -162,6 +166,7 @@ function parse(argv: readonly string[]): Parsed {
         output: { type: 'string', short: 'o' },
         chart: { type: 'string' },
         catalogue: { type: 'string', short: 'c' },
+        summary: { type: 'boolean', short: 's' },
         help: { type: 'boolean', short: 'h' },
         version: { type: 'boolean', short: 'v' },
       },
@@ -198,6 +203,10 @@ function parse(argv: readonly string[]): Parsed {
       );
     }
   }
+  const format = pick(text('format'), FORMATS, 'format') ?? 'text';
+  if (command === 'select' && format === 'html') {
+    throw new InputError('select writes text, markdown or json; --format html is for evaluate.');
+  }
   const output = text('output');
   const chart = text('chart');
   if (output !== undefined && output === chart) {
@@ -209,10 +218,11 @@ function parse(argv: readonly string[]): Parsed {
     help,
     version,
     file: positionals[0],
-    format: pick(text('format'), FORMATS, 'format') ?? 'text',
+    format,
     units: pick(text('units'), UNIT_SYSTEMS, 'units'),
     output,
     chart,
+    summary: values['summary'] === true,
   };
 }
 
@@ -256,7 +266,8 @@ function errorCount(report: ReturnType<Engine['evaluate']>): number {
 
 /**
  * Runs the command with its arguments (without `node` and the script) and returns the exit
- * code: 0 when every check passed, 1 when a check failed (the report is still written), 2 for
+ * code: 0 when the recommended candidate passes every check, 1 when none does (the report is
+ * still written), 2 for
  * input that cannot be used (arguments, unreadable or invalid scenario file, a design the
  * library refuses), 3 for an internal error. User errors print one message on standard error,
  * without a stack trace.
@@ -293,7 +304,11 @@ export async function runCli(
       const path = args.catalogue as string;
       const catalogue = engine.readCatalogue(await readText(io, path), path);
       const selection = engine.select(design, catalogue);
-      const rendered = engine.renderSelection(selection, args.format, args.units);
+      const rendered = engine.renderSelection(
+        selection,
+        args.format === 'html' ? 'text' : args.format,
+        args.units,
+      );
       if (args.output === undefined) io.stdout(rendered);
       else await writeText(io, args.output, rendered);
       if (args.chart !== undefined) {
@@ -303,15 +318,15 @@ export async function runCli(
       io.stderr('headflow: no pump of the catalogue passes every check (see the report).\n');
       return EXIT.checkFailed;
     }
-    const report = engine.evaluate(design);
-    const rendered = engine.render(report, args.format, args.units);
+    const report = engine.evaluate(design, args.chart !== undefined || args.format === 'html');
+    const rendered = engine.render(report, args.format, args.units, args.summary);
     if (args.output === undefined) io.stdout(rendered);
     else await writeText(io, args.output, rendered);
     if (args.chart !== undefined) await writeText(io, args.chart, engine.chart(report, args.units));
     if (report.passed) return EXIT.passed;
     const n = errorCount(report);
     io.stderr(
-      `headflow: the design did not pass: ${n === 1 ? 'a check failed' : `${n} checks failed`} (see the report).\n`,
+      `headflow: no candidate passes every check (${n === 1 ? '1 error' : `${n} errors`}; see the report).\n`,
     );
     return EXIT.checkFailed;
   } catch (e) {

@@ -4,7 +4,9 @@
  * @module
  */
 import { argumentError, checkFraction, checkPositive, HeadflowError } from '../errors';
-import { guardRange } from '../guards';
+import { guardBoolean, guardOptions, guardRange } from '../guards';
+import { fitting, fittingK, kFromCv, kFromKv } from '../losses/index';
+import { type PipeDimensions, material as pipeMaterial } from '../pipes/index';
 import {
   annualEnergy,
   CATALOGUE_FIT_TOLERANCE,
@@ -20,10 +22,15 @@ import {
   selectMotor,
   speedForFlow,
 } from '../pumps/index';
-import { type ScenarioCurve, type SystemCurve, systemScenarios } from '../system/index';
+import {
+  type LineElement,
+  type PipeRunInput,
+  type ScenarioCurve,
+  type SystemCurve,
+  systemScenarios,
+} from '../system/index';
 import {
   type Flow,
-  formatQuantity,
   type Length,
   type Power,
   type Pressure,
@@ -33,7 +40,7 @@ import {
   type Velocity,
 } from '../units/index';
 import { CAUTIONS } from './cautions';
-import { displayUnits } from './display-units';
+import { checkMessage } from './check-message';
 import type {
   Arrangement,
   CandidateInput,
@@ -43,9 +50,14 @@ import type {
   Check,
   DesignInput,
   DesignReport,
+  EvaluateOptions,
+  NpshTerms,
   ReportCurves,
+  ReportFluid,
+  RunInputSummary,
   SampledCurve,
   SpeedControl,
+  UnitSystem,
 } from './types';
 
 /** Defaults of the checks (see {@link DesignLimits}). */
@@ -67,28 +79,8 @@ const DUTY_TOLERANCE_SOURCE =
   'limits.dutyFlowTolerance (default 2 %: system-curve uncertainty, common practice; within the flow tolerance of pump acceptance tests, ISO 9906 / ANSI/HI 14.6)';
 const SAMPLES = 61;
 
-/** Formats numbers for check messages in the report's units. */
-interface Say {
-  flow(v: number): string;
-  head(v: number): string;
-  pressure(v: number): string;
-  power(v: number): string;
-  velocity(v: number): string;
-}
-
-function sayIn(units: DesignInput['units']): Say {
-  const u = displayUnits(units ?? 'si');
-  return {
-    flow: (v) => formatQuantity(v as Flow, u.flow),
-    head: (v) => formatQuantity(v as Length, u.head, 3),
-    pressure: (v) => formatQuantity(v as Pressure, u.pressure),
-    power: (v) => formatQuantity(v as Power, u.power, 3),
-    velocity: (v) => formatQuantity(v as Velocity, u.velocity, 3),
-  };
-}
-
 interface Limits {
-  readonly say: Say;
+  readonly units: UnitSystem;
   readonly npshMarginRatio: number;
   readonly npshMinimumMargin: number;
   readonly suction: { readonly min: number; readonly max: number };
@@ -119,20 +111,25 @@ interface Candidate {
   readonly setHead: (h: number) => number;
 }
 
-function fmt(v: number, digits = 4): string {
-  return Number(v.toPrecision(digits)).toString();
-}
-
+/**
+ * A check without its message: `evaluateDesign` writes every message at the end, in the
+ * report's units, from the values and words (see {@link withMessages}).
+ */
 function check(
   id: string,
   severity: Check['severity'],
   candidate: string | undefined,
   caseName: string | undefined,
-  message: string,
   values: Record<string, number>,
   source: string,
+  words: Record<string, string> = {},
 ): Check {
-  return { id, severity, candidate, case: caseName, message, values, source };
+  return { id, severity, candidate, case: caseName, message: '', values, words, source };
+}
+
+/** The checks with their messages written in a unit system. */
+function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
+  return checks.map((k) => ({ ...k, message: checkMessage(k, units) }));
 }
 
 function resolveLimits(input: DesignInput): Limits {
@@ -171,7 +168,7 @@ function resolveLimits(input: DesignInput): Limits {
       ? DESIGN_DEFAULTS.dutyFlowTolerance
       : guardRange('limits.dutyFlowTolerance', l.dutyFlowTolerance, { min: 0, max: 1 });
   return {
-    say: sayIn(input.units),
+    units: input.units ?? 'si',
     npshMarginRatio: ratio,
     npshMinimumMargin: minimum,
     suction: range('limits.suctionVelocity', l.suctionVelocity, DESIGN_DEFAULTS.suctionVelocity),
@@ -330,6 +327,149 @@ function checkLocation(input: DesignInput): void {
   }
 }
 
+/** The liquid of a case, restated. */
+function fluidOf(input: DesignInput, s: ScenarioCurve): ReportFluid {
+  const f = s.curve.definition.fluid;
+  return {
+    name: input.fluidName ?? 'liquid',
+    temperature: f.temperature,
+    density: f.density,
+    kinematicViscosity: f.kinematicViscosity,
+    vaporPressure: f.vaporPressure,
+  };
+}
+
+/** Head loss of the suction runs at a flow (m). */
+function suctionLoss(input: DesignInput, curve: SystemCurve, flow: number): number {
+  const n = input.pumpLocation?.suctionRuns ?? 1;
+  const details = curve.details(flow as Flow);
+  let loss = 0;
+  for (let i = 0; i < n; i++) loss += details.runs[i]?.totalLoss ?? 0;
+  return loss;
+}
+
+/** Velocity head of the suction end at a flow (m); 0 for a still surface. */
+function suctionVelocityHead(curve: SystemCurve, flow: number): number {
+  const d = curve.definition.suction.velocityDiameter;
+  if (d === undefined) return 0;
+  const v = flow / ((Math.PI * d * d) / 4);
+  return (v * v) / (2 * (curve.definition.g ?? STANDARD_GRAVITY));
+}
+
+/** NPSH available at a flow in its terms (the same balance `npshAvailable` solves). */
+function npshTermsAt(input: DesignInput, curve: SystemCurve, flow: number): NpshTerms | undefined {
+  const location = input.pumpLocation;
+  const def = curve.definition;
+  const pv = def.fluid.vaporPressure;
+  if (location === undefined || pv === undefined) return undefined;
+  const total = npshAvailableAt(input, curve, flow);
+  if (total === undefined) return undefined;
+  const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
+  return {
+    surfacePressureHead: (def.suction.pressure / rhoG) as Length,
+    vaporPressureHead: (pv / rhoG) as Length,
+    staticHeight: (def.suction.elevation - location.elevation) as Length,
+    suctionLoss: suctionLoss(input, curve, flow) as Length,
+    velocityHead: suctionVelocityHead(curve, flow) as Length,
+    total,
+  };
+}
+
+/**
+ * Absolute static pressure just after the pump at a flow whose head the pump adds is `head`:
+ * the suction surface's pressure and height, less the suction losses, plus the pump's head,
+ * less the velocity head of the first discharge run (the pipe the pump discharges into).
+ */
+function pumpOutletPressure(
+  input: DesignInput,
+  curve: SystemCurve,
+  flow: number,
+  head: number,
+): Pressure | undefined {
+  const location = input.pumpLocation;
+  if (location === undefined) return undefined;
+  const def = curve.definition;
+  const g = def.g ?? STANDARD_GRAVITY;
+  const rhoG = def.fluid.density * g;
+  const n = location.suctionRuns ?? 1;
+  const first = curve.details(flow as Flow).runs[n];
+  const v = first !== undefined && first.group === undefined ? first.velocity : 0;
+  const energyHead =
+    def.suction.pressure / rhoG +
+    (def.suction.elevation - location.elevation) -
+    suctionLoss(input, curve, flow) +
+    suctionVelocityHead(curve, flow) +
+    head;
+  return ((energyHead - (v * v) / (2 * g)) * rhoG) as Pressure;
+}
+
+/** The nominal size of a catalogue pipe in words: `NPS 6 (DN 150) sch 40`. */
+function sizeName(pipe: PipeDimensions): string {
+  const dn = pipe.dn === undefined ? '' : ` (DN ${pipe.dn})`;
+  return `NPS ${pipe.nps}${dn} sch ${pipe.schedule}`;
+}
+
+/** Every run of the line as given, with its figures in the design case at the duty. */
+function restateRuns(input: DesignInput, design: ScenarioCurve): RunInputSummary[] {
+  const details = design.curve.details(input.dutyFlow).runs;
+  const flat: PipeRunInput[] = [];
+  const walk = (elements: readonly LineElement[]): void => {
+    for (const el of elements) {
+      if ('kind' in el && el.kind === 'parallel') {
+        for (const branch of el.branches) flat.push(...branch);
+      } else flat.push(el as PipeRunInput);
+    }
+  };
+  walk(input.system.runs);
+  const g = design.curve.definition.g;
+  const density = design.curve.definition.fluid.density;
+  return flat.map((r, i) => {
+    const d = details[i];
+    const diameter = (d?.insideDiameter ??
+      r.insideDiameter ??
+      r.pipe?.insideDiameter ??
+      0) as Length;
+    const re = d?.reynolds ?? 0;
+    const mat = r.material === undefined ? undefined : pipeMaterial(r.material);
+    const flow = d?.flow ?? input.dutyFlow;
+    return {
+      name: d?.name ?? r.name ?? `run ${i + 1}`,
+      group: d?.group,
+      size: r.pipe === undefined ? undefined : sizeName(r.pipe),
+      insideDiameter: diameter,
+      length: r.length,
+      material: r.material,
+      roughness: r.roughness ?? mat?.roughness,
+      agedRoughness: r.agedRoughness ?? mat?.agedRoughness?.max,
+      fittings: (r.fittings ?? []).map((f) => {
+        const entry = fitting(f.id);
+        return {
+          id: entry.id,
+          description: entry.description,
+          count: f.count ?? 1,
+          k: re > 0 ? fittingK(f.id, re, diameter) : Number.NaN,
+          source: entry.sources.join('; '),
+        };
+      }),
+      valves: (r.valves ?? []).map((v, j) => {
+        const name = v.name ?? `valve ${j + 1}`;
+        if (v.cv !== undefined) {
+          return { name, given: 'cv' as const, coefficient: v.cv, k: kFromCv(v.cv, diameter) };
+        }
+        if (v.kv !== undefined) {
+          return { name, given: 'kv' as const, coefficient: v.kv, k: kFromKv(v.kv, diameter) };
+        }
+        return { name, given: 'k' as const, coefficient: v.k ?? 0, k: v.k ?? 0 };
+      }),
+      equipment: (r.components ?? []).map((c, j) => ({
+        name: c.name ?? `equipment ${j + 1}`,
+        loss: c.headLoss(flow, density, g),
+      })),
+      elevationChange: r.elevationChange,
+    };
+  });
+}
+
 /** The duty head and its parts in one case, with the system checks of that case. */
 function dutyInCase(
   input: DesignInput,
@@ -350,9 +490,6 @@ function dutyInCase(
         'warning',
         undefined,
         s.name,
-        `The liquid is near boiling at the suction: vapour pressure ${limits.say.pressure(fluid.vaporPressure)} is ` +
-          `${fmt((100 * fluid.vaporPressure) / suctionPressure, 3)} % of the suction surface pressure. ` +
-          'Small changes of temperature or pressure can flash it; check NPSH with care.',
         {
           vaporPressure: fluid.vaporPressure,
           suctionPressure,
@@ -371,13 +508,11 @@ function dutyInCase(
           'warning',
           undefined,
           s.name,
-          r.regime === 'laminar'
-            ? `Run '${r.name}' is laminar at the duty (Re ${fmt(r.reynolds)}): catalogue pump curves are for water; a viscous liquid lowers head and efficiency (correct the curves, for example by ANSI/HI 9.6.7).`
-            : `Run '${r.name}' is in the laminar-turbulent transition at the duty (Re ${fmt(r.reynolds)}): its friction is uncertain; the loss uses the conservative friction factor.`,
           { reynolds: r.reynolds },
           r.regime === 'laminar'
             ? 'ANSI/HI 9.6.7 (viscosity correction)'
             : 'common practice (transition 2300 < Re < 4000)',
+          { run: runLabel(r), regime: r.regime },
         ),
       );
     }
@@ -391,20 +526,23 @@ function dutyInCase(
             'warning',
             undefined,
             s.name,
-            `Velocity in ${isSuction ? 'suction' : 'discharge'} run '${r.name}' is ${limits.say.velocity(r.velocity)}, ` +
-              `outside the usual ${limits.say.velocity(range.min)} to ${limits.say.velocity(range.max)} for ${isSuction ? 'suction' : 'discharge'} lines` +
-              (r.velocity > range.max
-                ? ' (erosion, noise, surge and suction losses grow).'
-                : ' (settling, air pockets, an oversized pipe).'),
             { velocity: r.velocity, min: range.min, max: range.max },
             COMMON,
+            { run: r.name, side: isSuction ? 'suction' : 'discharge' },
           ),
         );
       }
     }
   });
+  const def = s.curve.definition;
   return {
     case: s.name,
+    fluid: fluidOf(input, s),
+    aged: def.aged ?? false,
+    suctionElevation: def.suction.elevation,
+    dischargeElevation: def.discharge.elevation,
+    npshTerms: npshTermsAt(input, s.curve, input.dutyFlow),
+    pumpDischargePressure: pumpOutletPressure(input, s.curve, input.dutyFlow, d.head),
     head: d.head,
     staticHead: d.staticHead,
     lossHead: d.lossHead,
@@ -432,7 +570,6 @@ function dutyFlowCheck(
   checks: Check[],
 ): void {
   const tolerance = limits.dutyFlowTolerance;
-  const toleranceText = `${fmt(100 * tolerance, 3)} %`;
   const short = (duty - flow) / duty;
   const values = { flow, dutyFlow: duty, shortfall: Math.max(0, short), tolerance };
   if (short > FLOW_ROUND_OFF) {
@@ -443,26 +580,12 @@ function dutyFlowCheck(
         beyond ? 'error' : 'info',
         candidate,
         caseName,
-        `Delivers ${limits.say.flow(flow)}, ${fmt(100 * short, 3)} % short of the duty ${limits.say.flow(duty)}: ` +
-          (beyond
-            ? `more than the duty-flow tolerance of ${toleranceText}.`
-            : `within the duty-flow tolerance of ${toleranceText} (limits.dutyFlowTolerance).`),
         values,
         DUTY_TOLERANCE_SOURCE,
       ),
     );
   } else if (-short > tolerance) {
-    checks.push(
-      check(
-        'duty-flow',
-        'info',
-        candidate,
-        caseName,
-        `Runs at ${limits.say.flow(flow)}, ${fmt(-100 * short, 3)} % above the duty ${limits.say.flow(duty)}: a valve would throttle it (or trim the impeller).`,
-        values,
-        COMMON,
-      ),
-    );
+    checks.push(check('duty-flow', 'info', candidate, caseName, values, COMMON));
   }
 }
 
@@ -478,6 +601,61 @@ function regionOf(share: PumpShare | undefined): CaseResult['region'] {
 function message(e: unknown): string {
   if (e instanceof HeadflowError) return e.message;
   throw e;
+}
+
+/** A run's name with its branch path (`loop / branch 2 / hose`). */
+function runLabel(r: { readonly name: string; readonly group: string | undefined }): string {
+  return r.group ? `${r.group} / ${r.name}` : r.name;
+}
+
+/**
+ * Why a set has no operating point in a case, as a reason and its numbers (SI), worked out
+ * from the curves themselves so that the report can say it in any unit system.
+ */
+function noPointReason(
+  c: Candidate,
+  system: SystemCurveLike,
+  dutyFlow: number,
+): { words: Record<string, string>; values: Record<string, number> } {
+  if (c.control === 'speed') {
+    const top = c.maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(c.maxSpeed);
+    const perPumpDuty = c.pumpFlow(dutyFlow);
+    const m = c.arrangement === 'series' ? c.count : 1;
+    if (perPumpDuty > top.flowRange.max) {
+      return {
+        words: { reason: 'beyond-curve' },
+        values: { dutyFlow, maxSpeed: c.maxSpeed, maxFlow: c.setFlow(top.flowRange.max) },
+      };
+    }
+    const pumpHead = top.head(perPumpDuty as Flow) * m;
+    const systemHead = system.head(perPumpDuty as Flow) * m;
+    if (pumpHead < systemHead) {
+      return {
+        words: { reason: 'too-little-head' },
+        values: { dutyFlow, maxSpeed: c.maxSpeed, pumpHead, systemHead },
+      };
+    }
+    return { words: { reason: 'below-curve' }, values: { dutyFlow, systemHead } };
+  }
+  const m = c.arrangement === 'series' ? c.count : 1;
+  const { min, max } = c.fullSpeed.flowRange;
+  const headMin = c.fullSpeed.head(min) * m;
+  const systemMin = system.head(min) * m;
+  if (headMin < systemMin) {
+    return {
+      words: { reason: 'cannot-reach' },
+      values: { dutyFlow, pumpHead: headMin, systemHead: systemMin },
+    };
+  }
+  return {
+    words: { reason: 'run-out' },
+    values: {
+      dutyFlow,
+      maxFlow: c.setFlow(max),
+      pumpHead: c.fullSpeed.head(max) * m,
+      systemHead: system.head(max) * m,
+    },
+  };
 }
 
 /** One candidate in one case: where it runs and the checks there. */
@@ -503,6 +681,8 @@ function runCase(
     npshRequired: undefined,
     npshRatio: undefined,
     velocities: [],
+    inputPower: undefined,
+    specificEnergy: undefined,
     iterations: 0,
   } as const;
   let pump: PumpCurve = c.pump;
@@ -522,19 +702,19 @@ function runCase(
       iterations = op.iterations;
     }
   } catch (e) {
-    const why = message(e);
-    checks.push(
-      check(
-        'no-operating-point',
-        'error',
-        c.name,
-        s.name,
-        `No operating point at the duty: ${why}`,
-        { dutyFlow: input.dutyFlow },
-        COMMON,
-      ),
+    message(e);
+    const reason = noPointReason(c, system, input.dutyFlow);
+    const k = check(
+      'no-operating-point',
+      'error',
+      c.name,
+      s.name,
+      reason.values,
+      COMMON,
+      reason.words,
     );
-    return { ...empty, failure: why };
+    checks.push(k);
+    return { ...empty, failure: checkMessage(k, limits.units) };
   }
   const flow = c.setFlow(q);
   const head = c.setHead(pump.head(q as Flow));
@@ -551,7 +731,6 @@ function runCase(
         'warning',
         c.name,
         s.name,
-        `Runs at ${fmt(percentOfBep ?? 0, 3)} % of its BEP flow, outside its preferred operating region.`,
         { percentOfBep: percentOfBep ?? 0 },
         REGION_SOURCE,
       ),
@@ -563,7 +742,6 @@ function runCase(
         'error',
         c.name,
         s.name,
-        `Runs at ${fmt(percentOfBep ?? 0, 3)} % of its BEP flow, outside its allowable operating region (vibration, recirculation, overheating).`,
         { percentOfBep: percentOfBep ?? 0 },
         'ANSI/HI 9.6.3 (allowable operating region; the manufacturer states it)',
       ),
@@ -590,7 +768,6 @@ function runCase(
           'error',
           c.name,
           s.name,
-          `Cavitation: NPSH available ${limits.say.head(npsha)} is below NPSH required ${limits.say.head(npshr)}. Raise the suction level or pressure, lower the pump, shorten or enlarge the suction line, or cool the liquid.`,
           { npshAvailable: npsha, npshRequired: npshr, ratio: m.ratio },
           NPSH_SOURCE,
         ),
@@ -602,7 +779,6 @@ function runCase(
           'warning',
           c.name,
           s.name,
-          `NPSH margin too small: ${limits.say.head(npsha)} available against ${limits.say.head(npshr)} required (ratio ${fmt(m.ratio, 3)}); the design asks for at least ${limits.say.head(m.requiredAvailable)}.`,
           {
             npshAvailable: npsha,
             npshRequired: npshr,
@@ -614,17 +790,7 @@ function runCase(
       );
     }
   } else if (input.pumpLocation !== undefined && npshr === undefined) {
-    checks.push(
-      check(
-        'npsh-data',
-        'warning',
-        c.name,
-        s.name,
-        'No NPSH-required data at this flow: cavitation is not checked. Ask the manufacturer for NPSH3 over the whole range.',
-        { flow },
-        COMMON,
-      ),
-    );
+    checks.push(check('npsh-data', 'warning', c.name, s.name, { flow }, COMMON));
   }
   if (c.input.motorRating !== undefined) {
     const perPumpPower = shaftPower / c.count;
@@ -636,7 +802,6 @@ function runCase(
           'error',
           c.name,
           s.name,
-          `Motor overload: the pump needs ${limits.say.power(perPumpPower)}, above the ${limits.say.power(c.input.motorRating)} motor${sf > 1 ? ` times its service factor ${sf}` : ''}.`,
           { shaftPower: perPumpPower, motorRating: c.input.motorRating, serviceFactor: sf },
           'NEMA MG 1 / IEC 60034-1 (rated output)',
         ),
@@ -644,9 +809,13 @@ function runCase(
     }
   }
   const details = s.curve.details(flow as Flow);
+  const drive = c.input.driveEfficiency ?? 1;
+  const inputPower = shaftPower / (c.input.motorEfficiency * drive);
   return {
     case: s.name,
     failure: undefined,
+    inputPower: inputPower as Power,
+    specificEnergy: flow > 0 ? inputPower / flow : undefined,
     speed: pump.speed,
     flow: flow as Flow,
     head: head as Length,
@@ -658,7 +827,7 @@ function runCase(
     npshRequired: npshr,
     npshRatio,
     velocities: details.runs.map((r) => ({
-      run: r.group ? `${r.group} / ${r.name}` : r.name,
+      run: runLabel(r),
       velocity: r.velocity as Velocity,
     })),
     iterations,
@@ -695,18 +864,28 @@ function evaluateCandidate(
     });
     maxShaftPower = m.nonOverloading.shaftPower;
     motor = m.nonOverloading.motor;
-    const dutyPower = Math.max(0, ...cases.map((r) => (r.shaftPower ?? 0) / c.count));
-    dutyOnlyMotor = selectMotor(dutyPower as Power, motorOptions);
-    if (dutyOnlyMotor.rating < motor.rating) {
+    const powers = cases.flatMap((r) => (r.shaftPower === undefined ? [] : [r.shaftPower]));
+    // With no operating point in any case there is no duty to size a motor for.
+    dutyOnlyMotor =
+      powers.length === 0
+        ? undefined
+        : selectMotor((Math.max(...powers) / c.count) as Power, motorOptions);
+    if (dutyOnlyMotor !== undefined && dutyOnlyMotor.rating < motor.rating) {
       checks.push(
         check(
           'motor-sizing',
           'info',
           c.name,
           undefined,
-          `A ${dutyOnlyMotor.nameplate} ${dutyOnlyMotor.unit} motor covers the duty points, but the pump can draw ${limits.say.power(maxShaftPower)} at the end of its curve (a burst pipe, an open bypass, a low static head): the ${motor.nameplate} ${motor.unit} motor never overloads.`,
-          { dutyOnly: dutyOnlyMotor.rating, nonOverloading: motor.rating, maxShaftPower },
+          {
+            dutyOnly: dutyOnlyMotor.rating,
+            dutyOnlyNameplate: dutyOnlyMotor.nameplate,
+            nonOverloading: motor.rating,
+            nonOverloadingNameplate: motor.nameplate,
+            maxShaftPower,
+          },
           series === 'nema' ? 'NEMA MG 1 (standard ratings)' : 'IEC 60072-1 (standard ratings)',
+          { dutyOnlyUnit: dutyOnlyMotor.unit, nonOverloadingUnit: motor.unit },
         ),
       );
     }
@@ -720,24 +899,15 @@ function evaluateCandidate(
           'warning',
           c.name,
           undefined,
-          `The ${limits.say.power(c.input.motorRating)} motor would overload if the pump ran out to the end of its curve (${limits.say.power(maxShaftPower)}).`,
           { maxShaftPower, motorRating: c.input.motorRating },
           COMMON,
         ),
       );
     }
   } catch (e) {
-    checks.push(
-      check(
-        'motor-sizing',
-        'error',
-        c.name,
-        undefined,
-        `No standard motor found: ${message(e)}`,
-        {},
-        COMMON,
-      ),
-    );
+    message(e);
+    const power = e instanceof HeadflowError && typeof e.value === 'number' ? e.value : Number.NaN;
+    checks.push(check('motor-sizing', 'error', c.name, undefined, { power }, COMMON));
   }
   let energy: CandidateReport['energy'];
   try {
@@ -765,32 +935,26 @@ function evaluateCandidate(
         e.cost === undefined
           ? undefined
           : { amount: e.cost.amount * c.count, currency: e.cost.currency },
+      control: c.control === 'speed' ? 'speed' : 'throttle',
+      hours: profile.reduce((a, r) => a + r.hours, 0),
     };
   } catch (e) {
+    message(e);
+    const perPumpFlow =
+      e instanceof HeadflowError && typeof e.value === 'number' ? e.value : Number.NaN;
     checks.push(
-      check(
-        'energy',
-        'error',
-        c.name,
-        design.name,
-        `The duty profile cannot be met: ${message(e)}`,
-        {},
-        COMMON,
-      ),
+      check('energy', 'error', c.name, design.name, { flow: c.setFlow(perPumpFlow) }, COMMON, {
+        detail:
+          c.control === 'speed'
+            ? "the set cannot deliver it within the drive's highest speed and the catalogue curve"
+            : 'at full speed the set gives less head than the system needs there, and throttling cannot raise head',
+      }),
     );
   }
   const shutoff = fullSpeed.shutoffHead ?? fullSpeed.head(fullSpeed.flowRange.min);
   const setShutoff = c.setHead(shutoff);
   checks.push(
-    check(
-      'dead-head',
-      'warning',
-      c.name,
-      undefined,
-      `Against a closed discharge the set runs at shut-off (${limits.say.head(setShutoff)}) and heats the liquid it churns: provide a minimum-flow bypass, a low-flow trip or interlocked valves.`,
-      { shutoffHead: setShutoff },
-      COMMON,
-    ),
+    check('dead-head', 'warning', c.name, undefined, { shutoffHead: setShutoff }, COMMON),
   );
   if (limits.designPressure !== undefined) {
     for (const s of family) {
@@ -806,7 +970,6 @@ function evaluateCandidate(
             'error',
             c.name,
             s.name,
-            `At shut-off the discharge pressure reaches ${limits.say.pressure(maxPressure)} (absolute), above the piping's design pressure ${limits.say.pressure(limits.designPressure)} (absolute): use a lower-head pump, a relief valve or a higher pressure rating.`,
             { maxPressure, designPressure: limits.designPressure },
             'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)',
           ),
@@ -825,7 +988,17 @@ function evaluateCandidate(
     dutyOnlyMotor,
     energy,
     curveFit: { head: c.pump.fits.head, efficiency: c.pump.fits.efficiency },
-    checks,
+    pump: {
+      points: c.pump.catalogue ?? [],
+      ratedSpeed: c.pump.ratedSpeed,
+      speed: c.pump.speed,
+      maxSpeed: c.maxSpeed,
+      motorEfficiency: c.input.motorEfficiency,
+      driveEfficiency: c.input.driveEfficiency,
+      motorSeries: series,
+      bep: c.pump.bestEfficiencyPoint,
+    },
+    checks: withMessages(checks, limits.units),
     passed: !checks.some((k) => k.severity === 'error'),
   };
 }
@@ -844,13 +1017,13 @@ function curveFitChecks(c: Candidate, checks: Check[]): void {
         'warning',
         c.name,
         undefined,
-        `The head fit (${fitName(head)}) misses a catalogue point by ${fmt(100 * head.maxRelativeResidual, 3)} % of its head, more than the tolerance of ${fmt(100 * CATALOGUE_FIT_TOLERANCE.headRelative, 2)} %: the operating points and power move with it. Use the default fit (through every point) or another degree.`,
         {
           maxResidual: head.maxResidual,
           maxRelativeResidual: head.maxRelativeResidual,
           tolerance: CATALOGUE_FIT_TOLERANCE.headRelative,
         },
         COMMON,
+        { curve: 'head', fit: fitName(head) },
       ),
     );
   }
@@ -861,12 +1034,12 @@ function curveFitChecks(c: Candidate, checks: Check[]): void {
         'warning',
         c.name,
         undefined,
-        `The efficiency fit (${fitName(efficiency)}) misses a catalogue point by ${fmt(100 * efficiency.maxResidual, 3)} percentage points, more than the tolerance of ${fmt(100 * CATALOGUE_FIT_TOLERANCE.efficiency, 2)} percentage point: the BEP, the power and the yearly energy move with it. Use the default fit or another degree.`,
         {
           maxResidual: efficiency.maxResidual,
           tolerance: CATALOGUE_FIT_TOLERANCE.efficiency,
         },
         COMMON,
+        { curve: 'efficiency', fit: fitName(efficiency) },
       ),
     );
   }
@@ -882,6 +1055,7 @@ function sample(
   to: number,
   f: (q: number) => number,
   group?: string,
+  speed?: { readonly speed: number; readonly max: boolean },
 ): SampledCurve {
   const flows: number[] = [];
   const values: number[] = [];
@@ -898,7 +1072,13 @@ function sample(
       values.push(v);
     }
   }
-  return group === undefined ? { name, flows, values } : { name, group, flows, values };
+  return {
+    name,
+    ...(group === undefined ? {} : { group }),
+    ...(speed === undefined ? {} : { speed: speed.speed, maxSpeed: speed.max }),
+    flows,
+    values,
+  };
 }
 
 function curvesOf(
@@ -906,6 +1086,7 @@ function curvesOf(
   candidates: readonly Candidate[],
   reports: readonly Omit<CandidateReport, 'rank'>[],
   family: readonly ScenarioCurve[],
+  duty: readonly CaseDuty[],
 ): ReportCurves {
   let qMax = input.dutyFlow * 1.5;
   for (const c of candidates) qMax = Math.max(qMax, c.setFlow(c.fullSpeed.flowRange.max));
@@ -925,6 +1106,7 @@ function curvesOf(
         c.setFlow(max),
         (q) => c.setHead(full.head(c.pumpFlow(q) as Flow)),
         label,
+        { speed: full.speed, max: true },
       ),
     );
     efficiency.push(
@@ -968,11 +1150,12 @@ function curvesOf(
         const at = c.pump.atSpeed(r.speed);
         pumps.push(
           sample(
-            `${label} at ${fmt((r.speed * 60) / (2 * Math.PI), 4)} rpm`,
+            `${label} at ${Math.round((r.speed * 60) / (2 * Math.PI))} rpm`,
             c.setFlow(at.flowRange.min),
             c.setFlow(at.flowRange.max),
             (q) => c.setHead(at.head(c.pumpFlow(q) as Flow)),
             label,
+            { speed: r.speed, max: false },
           ),
         );
       }
@@ -991,8 +1174,15 @@ function curvesOf(
   const points = reports.flatMap((r) =>
     r.cases
       .filter((k) => k.flow !== undefined && k.head !== undefined)
-      .map((k) => ({ name: `${r.name} / ${k.case}`, flow: k.flow ?? 0, head: k.head ?? 0 })),
+      .map((k) => ({
+        name: `${r.name} / ${k.case}`,
+        candidate: r.name,
+        case: k.case,
+        flow: k.flow ?? 0,
+        head: k.head ?? 0,
+      })),
   );
+  const dutyPoints = duty.map((d) => ({ case: d.case, flow: input.dutyFlow, head: d.head }));
   return {
     systems,
     pumps,
@@ -1001,6 +1191,7 @@ function curvesOf(
     npshAvailable: npshAvailableCurves,
     preferredRegions,
     points,
+    dutyPoints,
   };
 }
 
@@ -1030,8 +1221,17 @@ function curvesOf(
  * report.candidates[0]?.cases[0]?.flow; // where candidate A runs
  * ```
  */
-export function evaluateDesign(input: DesignInput): DesignReport {
+export function evaluateDesign(
+  input: DesignInput,
+  options: EvaluateOptions | null = {},
+): DesignReport {
+  const o = guardOptions<EvaluateOptions>('options', options);
+  const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
+  const units = input.units ?? 'si';
+  if (units !== 'si' && units !== 'us') {
+    throw argumentError('INVALID_ARGUMENT', 'units', units, undefined, "'si' or 'us'");
+  }
   const atmosphere =
     input.atmosphere === undefined
       ? STANDARD_ATMOSPHERE
@@ -1089,17 +1289,7 @@ export function evaluateDesign(input: DesignInput): DesignReport {
     input.pumpLocation !== undefined &&
     family.some((s) => s.curve.definition.fluid.vaporPressure === undefined)
   ) {
-    systemChecks.push(
-      check(
-        'npsh-data',
-        'warning',
-        undefined,
-        undefined,
-        'The fluid has no vapour pressure: NPSH available cannot be computed and cavitation is not checked.',
-        {},
-        COMMON,
-      ),
-    );
+    systemChecks.push(check('npsh-data', 'warning', undefined, undefined, {}, COMMON));
   }
   const evaluated = candidates.map((c) => evaluateCandidate(input, c, family, limits, profile));
   const order = evaluated
@@ -1112,19 +1302,40 @@ export function evaluateDesign(input: DesignInput): DesignReport {
       return a.i - b.i;
     });
   const ranked: CandidateReport[] = order.map(({ r }, k) => ({ ...r, rank: k + 1 }));
-  const curves = curvesOf(input, candidates, evaluated, family);
-  // Passed: no check anywhere is an error (a failing candidate fails the report; the
-  // ranking still puts the passing candidates first).
-  const passed = !systemChecks.some((k) => k.severity === 'error') && ranked.every((r) => r.passed);
+  const curves = wantCurves ? curvesOf(input, candidates, evaluated, family, duty) : undefined;
+  // Passed: the recommended (first-ranked) candidate passes every check and no system check
+  // is an error; another candidate failing does not fail the design.
+  const systemOk = !systemChecks.some((k) => k.severity === 'error');
+  const first = ranked[0];
+  const passed = systemOk && (first === undefined || first.passed);
+  const design = family[0] as ScenarioCurve;
   return {
     name: input.name,
-    units: input.units ?? 'si',
+    units,
     dutyFlow: input.dutyFlow,
-    fluid: `${input.fluidName ?? 'liquid'} at ${fmt(input.system.fluid.temperature - 273.15, 4)} degC, ${fmt(input.system.fluid.density, 5)} kg/m3`,
+    fluid: fluidOf(input, design),
+    verdict: {
+      candidates: ranked.length,
+      passing: ranked.filter((r) => r.passed).length,
+      recommended: first?.name,
+      passed,
+    },
+    inputs: {
+      runs: restateRuns(input, design),
+      pumpLocation:
+        input.pumpLocation === undefined
+          ? undefined
+          : {
+              elevation: input.pumpLocation.elevation,
+              suctionRuns: input.pumpLocation.suctionRuns ?? 1,
+            },
+      profile,
+      energyPrice: input.energyPrice,
+    },
     atmosphere,
     duty,
     candidates: ranked,
-    checks: systemChecks,
+    checks: withMessages(systemChecks, units),
     cautions: CAUTIONS,
     passed,
     curves,

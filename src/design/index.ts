@@ -6,6 +6,7 @@
  * @module design
  */
 export { CAUTIONS } from './cautions';
+export { checkMessage } from './check-message';
 export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
 export {
@@ -18,6 +19,7 @@ export {
 export type {
   Arrangement,
   CandidateInput,
+  CandidatePump,
   CandidateReport,
   CaseDuty,
   CaseResult,
@@ -26,10 +28,17 @@ export type {
   DesignLimits,
   DesignReport,
   DisplayUnits,
+  EvaluateOptions,
+  NpshTerms,
   PumpLocation,
   ReportCurves,
+  ReportFluid,
+  ReportInputs,
+  RunFitting,
+  RunInputSummary,
   SampledCurve,
   Severity,
   SpeedControl,
   UnitSystem,
+  Verdict,
 } from './types';

@@ -10,7 +10,7 @@
 import * as v from 'valibot';
 import { HeadflowError } from '../errors';
 import { assembleDesign } from './scenario-build';
-import { ScenarioFileError, scenarioIssues } from './scenario-issues';
+import { ScenarioFileError, type ScenarioIssue, scenarioIssues } from './scenario-issues';
 import { SCENARIO_FORMAT, scenarioObject } from './scenario-schema';
 import type { DesignInput } from './types';
 
@@ -98,7 +98,39 @@ export function readScenario(json: unknown, options: ReadScenarioOptions = {}): 
   if (issues === undefined) {
     throw new HeadflowError('INVALID_ARGUMENT', 'the scenario file could not be read.');
   }
-  throw new ScenarioFileError(issues, options.source);
+  const [first, ...rest] = issues.map((issue, i) =>
+    asWritten(issue, writtenAt(value, result.issues[i]?.path)),
+  );
+  throw new ScenarioFileError([first as ScenarioIssue, ...rest], options.source);
+}
+
+/** The file's own text at a path of an issue, when it is a string (`"200 ft"`). */
+function writtenAt(
+  value: unknown,
+  path: readonly { readonly key: unknown }[] | undefined,
+): string | undefined {
+  let at: unknown = value;
+  for (const item of path ?? []) {
+    if (typeof at !== 'object' || at === null) return undefined;
+    at = (at as Record<string | number, unknown>)[item.key as string | number];
+  }
+  return typeof at === 'string' ? at : undefined;
+}
+
+/**
+ * An issue that echoes the value as the file wrote it: a library's `found 60.96 m` (the value
+ * after conversion to SI) becomes `found "200 ft"`; a message that does not quote the file's
+ * text gets it added.
+ */
+function asWritten(issue: ScenarioIssue, written: string | undefined): ScenarioIssue {
+  if (written === undefined) return issue;
+  const quoted = JSON.stringify(written);
+  if (issue.message.includes(quoted)) return issue;
+  const converted = /found -?\d[\d.e+-]* [^\s,;)]+?(?=[\s,;)]|\.(?:\s|$)|$)/;
+  const message = converted.test(issue.message)
+    ? issue.message.replace(converted, `found ${quoted}`)
+    : `${issue.message.replace(/\s+$/, '')} (the file gives ${quoted})`;
+  return { ...issue, message };
 }
 
 export { ScenarioFileError, type ScenarioIssue } from './scenario-issues';

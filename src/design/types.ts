@@ -4,14 +4,24 @@
  *
  * @module
  */
-import type { FitReport, MotorRating, MotorSeries, ProfileRow, PumpCurve } from '../pumps/index';
+import type {
+  CataloguePoint,
+  FitReport,
+  MotorRating,
+  MotorSeries,
+  ProfileRow,
+  PumpCurve,
+} from '../pumps/index';
 import type { OperatingCase, RunDetails, SystemDefinition } from '../system/index';
 import type {
+  Density,
   Flow,
+  KinematicViscosity,
   Length,
   Power,
   Pressure,
   RotationalSpeed,
+  Temperature,
   UnitOf,
   Velocity,
 } from '../units/index';
@@ -139,17 +149,68 @@ export interface Check {
   readonly candidate: string | undefined;
   /** Operating case it concerns, if any. */
   readonly case: string | undefined;
-  /** Plain words: what was found and what to do. */
+  /**
+   * Plain words: what was found and what to do, in the report's unit system. Renderers rebuild
+   * it in the unit system they print in with `checkMessage(check, units)`, from `values` and
+   * `words`.
+   */
   readonly message: string;
   /** The numbers behind it, SI, by name (for example `{ npshAvailable: 4.1, npshRequired: 3.6 }`). */
   readonly values: Readonly<Record<string, number>>;
+  /** The words behind it that are not numbers: a run's name, a line's side, a reason. */
+  readonly words: Readonly<Record<string, string>>;
   /** The standard, publication or 'common practice' the limit comes from. */
   readonly source: string;
+}
+
+/** The liquid in one operating case. */
+export interface ReportFluid {
+  /** As the input names it (`'water'`), or `'liquid'`. */
+  readonly name: string;
+  readonly temperature: Temperature;
+  readonly density: Density;
+  readonly kinematicViscosity: KinematicViscosity;
+  /** Absolute vapour pressure, when known. */
+  readonly vaporPressure: Pressure | undefined;
+}
+
+/**
+ * The NPSH available at the duty flow in its terms (all heads of the liquid, m):
+ * `total = surfacePressureHead - vaporPressureHead + staticHeight - suctionLoss + velocityHead`.
+ */
+export interface NpshTerms {
+  /** Absolute pressure on the suction surface as a head, p_s / (rho g). */
+  readonly surfacePressureHead: Length;
+  /** Vapour pressure as a head, p_v / (rho g). */
+  readonly vaporPressureHead: Length;
+  /** Suction surface above the impeller eye (negative: a suction lift). */
+  readonly staticHeight: Length;
+  /** Losses of the suction runs. */
+  readonly suctionLoss: Length;
+  /** Velocity head of the suction end (0 for a still surface). */
+  readonly velocityHead: Length;
+  readonly total: Length;
 }
 
 /** The duty in one operating case. */
 export interface CaseDuty {
   readonly case: string;
+  /** The liquid in this case. */
+  readonly fluid: ReportFluid;
+  /** Whether the runs use their aged roughness in this case. */
+  readonly aged: boolean;
+  /** Elevation of the suction end (a surface or point) in this case. */
+  readonly suctionElevation: Length;
+  /** Elevation of the discharge end in this case. */
+  readonly dischargeElevation: Length;
+  /** NPSH available at the duty flow in its terms, when it can be known. */
+  readonly npshTerms: NpshTerms | undefined;
+  /**
+   * Absolute static pressure in the line just after the pump at the duty flow (at the pump's
+   * elevation; velocity head of the first discharge run taken off), when the pump location
+   * is known.
+   */
+  readonly pumpDischargePressure: Pressure | undefined;
   /** Head the pumps must add at the duty flow. */
   readonly head: Length;
   readonly staticHead: Length;
@@ -185,6 +246,10 @@ export interface CaseResult {
   readonly npshRatio: number | undefined;
   /** Velocity in each run at this flow. */
   readonly velocities: readonly { readonly run: string; readonly velocity: Velocity }[];
+  /** Electrical input power of the whole set (shaft power / (motor x drive efficiency)). */
+  readonly inputPower: Power | undefined;
+  /** Electrical energy per volume pumped in this case, J/m3 (input power / flow). */
+  readonly specificEnergy: number | undefined;
   /** Root-finder iterations for the operating point (and the speed, under speed control). */
   readonly iterations: number;
 }
@@ -202,13 +267,21 @@ export interface CandidateReport {
   readonly motor: MotorRating | undefined;
   /** Smallest standard motor per pump that covers the duty points only. */
   readonly dutyOnlyMotor: MotorRating | undefined;
-  /** Yearly energy and cost of the whole set over the profile, design case. */
+  /**
+   * Yearly energy and cost of the whole set over the profile, design case; `control` says how
+   * it meets each profile flow: `'throttle'` (full speed, a valve throttles it to the flow) or
+   * `'speed'` (a drive turns it down to the flow); `hours` is the profile's total.
+   */
   readonly energy:
     | {
         readonly kWh: number;
         readonly cost: { readonly amount: number; readonly currency: string } | undefined;
+        readonly control: 'throttle' | 'speed';
+        readonly hours: number;
       }
     | undefined;
+  /** The pump as given: catalogue points and speed, the drive's top speed, efficiencies. */
+  readonly pump: CandidatePump;
   /**
    * How the pump's head and efficiency curves fit its catalogue points (at the catalogue speed
    * and diameter): method, degree, default or given, largest residual and whether it lies
@@ -223,11 +296,79 @@ export interface CandidateReport {
   readonly rank: number;
 }
 
+/** A candidate's pump as given, restated in the report. */
+export interface CandidatePump {
+  /** The catalogue points, at `ratedSpeed`. */
+  readonly points: readonly CataloguePoint[];
+  readonly ratedSpeed: RotationalSpeed;
+  /** The speed the curve was given at (after any speed change by the caller). */
+  readonly speed: RotationalSpeed;
+  /** Highest speed it runs at (the drive's limit under speed control). */
+  readonly maxSpeed: RotationalSpeed;
+  readonly motorEfficiency: number;
+  readonly driveEfficiency: number | undefined;
+  readonly motorSeries: MotorSeries;
+  /** Best efficiency point of one pump at `speed`, when efficiency is known. */
+  readonly bep:
+    | { readonly flow: Flow; readonly head: Length; readonly efficiency: number }
+    | undefined;
+}
+
+/** One fitting line of a run, restated. */
+export interface RunFitting {
+  readonly id: string;
+  readonly description: string;
+  readonly count: number;
+  /** K of one such fitting at the design case's duty (Reynolds number and diameter of the run). */
+  readonly k: number;
+  readonly source: string;
+}
+
+/** A run as given, restated in the report (figures in the design case). */
+export interface RunInputSummary {
+  readonly name: string;
+  /** Branch path for runs in a parallel group. */
+  readonly group: string | undefined;
+  /** Nominal size and wall (`'NPS 6 sch 40'`), when the run names a catalogue pipe. */
+  readonly size: string | undefined;
+  readonly insideDiameter: Length;
+  readonly length: Length;
+  readonly material: string | undefined;
+  /** Roughness of new pipe used, and of aged pipe where one is known. */
+  readonly roughness: Length | undefined;
+  readonly agedRoughness: Length | undefined;
+  readonly fittings: readonly RunFitting[];
+  /** Valves given by a flow coefficient: the coefficient as given and the K it makes. */
+  readonly valves: readonly {
+    readonly name: string;
+    readonly given: 'cv' | 'kv' | 'k';
+    readonly coefficient: number;
+    readonly k: number;
+  }[];
+  /** Equipment with its loss at the design case's duty. */
+  readonly equipment: readonly { readonly name: string; readonly loss: Length }[];
+  readonly elevationChange: Length | undefined;
+}
+
+/** The verdict of a report: how many candidates pass and which one is recommended. */
+export interface Verdict {
+  readonly candidates: number;
+  readonly passing: number;
+  /** The first-ranked candidate, when there is one. */
+  readonly recommended: string | undefined;
+  /** True when the recommended candidate passes every check and no system check is an error. */
+  readonly passed: boolean;
+}
+
 /** A curve sampled for charts: `values[i]` at `flows[i]` (SI: m3/s and m, or a fraction). */
 export interface SampledCurve {
   readonly name: string;
   /** The candidate (set) a pump-side curve belongs to, so a chart can colour it alike. */
   readonly group?: string;
+  /** For a pump curve: the speed it is drawn at (rad/s). */
+  readonly speed?: number;
+  /** For a pump curve: whether that is the highest speed the set may run at. */
+  readonly maxSpeed?: boolean;
   readonly flows: readonly number[];
   readonly values: readonly number[];
 }
@@ -254,9 +395,37 @@ export interface ReportCurves {
   /** Operating point of each candidate in each case. */
   readonly points: readonly {
     readonly name: string;
+    readonly candidate?: string;
+    readonly case?: string;
     readonly flow: number;
     readonly head: number;
   }[];
+  /** The duty point (duty flow, head the system needs) of each case. */
+  readonly dutyPoints?: readonly {
+    readonly case: string;
+    readonly flow: number;
+    readonly head: number;
+  }[];
+}
+
+/** Options of `evaluateDesign`. */
+export interface EvaluateOptions {
+  /**
+   * Sample the curves a chart draws (`report.curves`); default false. Sampling takes a third
+   * of the evaluation's time, so ask for it only when a chart is wanted.
+   */
+  readonly curves?: boolean;
+}
+
+/** What a report restates of its input. */
+export interface ReportInputs {
+  /** Every run, in flow order (parallel branches flattened). */
+  readonly runs: readonly RunInputSummary[];
+  /** Elevation of the impeller eye and how many runs are the suction line, when given. */
+  readonly pumpLocation: { readonly elevation: Length; readonly suctionRuns: number } | undefined;
+  /** Hours a year at each flow. */
+  readonly profile: readonly ProfileRow[];
+  readonly energyPrice: { readonly perKWh: number; readonly currency: string } | undefined;
 }
 
 /** The report of a design evaluation. All numbers are SI; `units` says how to print them. */
@@ -264,8 +433,12 @@ export interface DesignReport {
   readonly name: string;
   readonly units: UnitSystem;
   readonly dutyFlow: Flow;
-  /** The liquid in the design case, in words: name, temperature, density. */
-  readonly fluid: string;
+  /** The liquid in the design case. */
+  readonly fluid: ReportFluid;
+  /** How many candidates pass and which one is recommended. */
+  readonly verdict: Verdict;
+  /** The input restated: runs, pump location, duty profile, price of energy. */
+  readonly inputs: ReportInputs;
   /** Atmospheric pressure at the site (absolute), against which the ends' gauge pressures are shown. */
   readonly atmosphere: Pressure;
   /** The duty in each operating case. */
@@ -276,10 +449,13 @@ export interface DesignReport {
   readonly checks: readonly Check[];
   /** The usual engineering cautions; always present. */
   readonly cautions: readonly string[];
-  /** True when no check anywhere is an error. */
+  /**
+   * True when the recommended (first-ranked) candidate passes every check and no system check
+   * is an error (with no candidates: no system check is an error). Other candidates may fail.
+   */
   readonly passed: boolean;
-  /** Curves for charts. */
-  readonly curves: ReportCurves;
+  /** Curves for charts, when asked for (`evaluateDesign(input, { curves: true })`). */
+  readonly curves: ReportCurves | undefined;
 }
 
 /** Display units of each unit system (for renderers and the CLI). */

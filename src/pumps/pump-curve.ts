@@ -83,6 +83,7 @@ interface Base {
   readonly speed: number;
   readonly diameter: number | undefined;
   readonly fits: PumpCurve['fits'];
+  readonly points: readonly CataloguePoint[];
 }
 
 const GRID = 512;
@@ -474,6 +475,7 @@ function buildBase(input: PumpCurveInput): Base {
     allowable,
     speed: input.speed,
     diameter: input.impellerDiameter,
+    points: Object.freeze(points.map((p) => Object.freeze({ ...p }))),
     fits: {
       head: head.report,
       efficiency: efficiency?.report,
@@ -521,6 +523,7 @@ class ScaledCurve implements PumpCurve {
   readonly preferredRegion: FlowRange | undefined;
   readonly allowableRegion: FlowRange | undefined;
   readonly fits: PumpCurve['fits'];
+  readonly catalogue: readonly CataloguePoint[];
   private readonly qs: number;
   private readonly hs: number;
 
@@ -533,6 +536,7 @@ class ScaledCurve implements PumpCurve {
     this.hs = this.qs * this.qs;
     this.speed = (base.speed * rs) as RotationalSpeed;
     this.ratedSpeed = base.speed as RotationalSpeed;
+    this.catalogue = base.points;
     this.ratedImpellerDiameter = base.diameter as Length | undefined;
     this.impellerDiameter =
       base.diameter === undefined ? undefined : ((base.diameter * rd) as Length);

@@ -156,6 +156,8 @@ export interface PumpCurve extends Pump {
   readonly ratedSpeed: RotationalSpeed;
   /** Impeller diameter of the catalogue data, when given. */
   readonly ratedImpellerDiameter: Length | undefined;
+  /** The catalogue points the curve was built from (at `ratedSpeed`), when it keeps them. */
+  readonly catalogue?: readonly CataloguePoint[];
   /** How each curve fits the catalogue points (at the catalogue's speed and diameter). */
   readonly fits: {
     readonly head: FitReport;

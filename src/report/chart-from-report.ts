@@ -4,8 +4,8 @@
  *
  * @module
  */
-import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
-import { displayUnits } from '../design/index';
+import type { DesignReport, SampledCurve, UnitSystem } from '../design/core';
+import { displayUnits } from '../design/core';
 import { argumentError } from '../errors';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
@@ -28,10 +28,20 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
       );
     }
     const points = c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) }));
-    return c.group === undefined
-      ? { name: c.name, points }
-      : { name: c.name, group: c.group, points };
+    return {
+      name: c.name,
+      ...(c.group === undefined ? {} : { group: c.group }),
+      ...(c.speed === undefined ? {} : { speed: c.speed }),
+      ...(c.maxSpeed === undefined ? {} : { maxSpeed: c.maxSpeed }),
+      points,
+    };
   });
+}
+
+/** The colour group of a candidate: the label its curves carry (`"B (2 in parallel)"`). */
+function groupOf(report: DesignReport, candidate: string): string {
+  const c = report.candidates.find((k) => k.name === candidate);
+  return c !== undefined && c.count > 1 ? `${c.name} (${c.count} in ${c.arrangement})` : candidate;
 }
 
 /**
@@ -63,12 +73,27 @@ export function chartSpecFromReport(
 ): ChartSpec {
   const u = displayUnits(chosenUnits(report, options.units));
   const c = report.curves;
+  if (c === undefined) {
+    throw argumentError(
+      'INVALID_ARGUMENT',
+      'report.curves',
+      'none',
+      undefined,
+      'a report evaluated with its curves: evaluateDesign(input, { curves: true })',
+    );
+  }
   return {
     title: report.name,
     units: { flow: u.flow, head: u.head },
     pumpCurves: series('curves.pumps', c.pumps),
     systemCurves: series('curves.systems', c.systems),
-    operatingPoints: c.points.map((p) => ({ name: p.name, flow: p.flow, head: p.head })),
+    operatingPoints: c.points.map((p) => ({
+      name: p.name,
+      flow: p.flow,
+      head: p.head,
+      ...(p.candidate === undefined ? {} : { group: groupOf(report, p.candidate) }),
+    })),
+    dutyPoints: (c.dutyPoints ?? []).map((d) => ({ name: d.case, flow: d.flow, head: d.head })),
     preferredRegions: c.preferredRegions.map((r) => ({
       name: r.name,
       minFlow: r.minFlow,

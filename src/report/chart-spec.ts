@@ -35,6 +35,10 @@ export interface ChartSeries {
    * Without it, colour follows the position in the list.
    */
   readonly group?: string;
+  /** For a pump curve: the speed it is drawn at (rad/s); the legend and the curve say it. */
+  readonly speed?: number;
+  /** For a pump curve: true when it is the highest speed the pump may run at. */
+  readonly maxSpeed?: boolean;
 }
 
 /** A named operating point (where a pump curve meets a system curve). */
@@ -45,6 +49,8 @@ export interface ChartMarker {
   readonly flow: number;
   /** Head, m (may be negative only where a system has a negative static head). */
   readonly head: number;
+  /** The candidate (colour group) it belongs to, for its marker's colour. */
+  readonly group?: string;
 }
 
 /** A named range of flow, drawn as a translucent vertical band (a preferred operating region). */
@@ -90,6 +96,8 @@ export interface ChartSpec {
   readonly npshRequired: readonly ChartSeries[];
   /** NPSH available (m) against flow, one per operating case; drawn in the lower panel. Dash-dot lines. */
   readonly npshAvailable?: readonly ChartSeries[];
+  /** The duty point of each operating case (named by the case): drawn as a cross. */
+  readonly dutyPoints?: readonly ChartMarker[];
 }
 
 /** Size of the drawing. */

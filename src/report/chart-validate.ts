@@ -135,6 +135,10 @@ export function validateChart(spec: ChartSpec, options: ChartOptions): void {
   }
   checkList('operatingPoints', spec.operatingPoints);
   for (const [i, m] of spec.operatingPoints.entries()) checkMarker(`operatingPoints[${i}]`, m);
+  if (spec.dutyPoints !== undefined) {
+    checkList('dutyPoints', spec.dutyPoints);
+    for (const [i, m] of spec.dutyPoints.entries()) checkMarker(`dutyPoints[${i}]`, m);
+  }
   checkList('preferredRegions', spec.preferredRegions);
   for (const [i, b] of spec.preferredRegions.entries()) checkBand(`preferredRegions[${i}]`, b);
   if (curves === 0) {

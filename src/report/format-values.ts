@@ -6,7 +6,7 @@
  * @module
  * @internal
  */
-import type { DesignReport, UnitSystem } from '../design/index';
+import type { DesignReport, UnitSystem } from '../design/core';
 import { argumentError } from '../errors';
 import { type Dimension, type Quantity, to, type UnitOf } from '../units/index';
 
@@ -25,11 +25,12 @@ export function formatNumber(x: number | undefined, digits = 4): string {
   if (x === undefined || !Number.isFinite(x)) return DASH;
   // Whole numbers at or above 10^(digits - 1) keep every integer digit (no 1.235e+5).
   const rounded = Math.abs(x) >= 10 ** (digits - 1) ? Math.round(x) : Number(x.toPrecision(digits));
-  if (rounded === 0) return '0';
+  // Zero keeps the decimals of its neighbours in a column (`0.000` beside `11.15`).
+  if (rounded === 0) return (0).toFixed(Math.min(MAX_DECIMALS, digits - 1));
   const magnitude = Math.floor(Math.log10(Math.abs(rounded)));
   const decimals = Math.min(MAX_DECIMALS, Math.max(0, digits - 1 - magnitude));
   const text = rounded.toFixed(decimals);
-  return Number(text) === 0 ? '0' : text;
+  return Number(text) === 0 ? (0).toFixed(decimals) : text;
 }
 
 /** A number with a fixed count of decimals (`78.2`), or a dash. */

@@ -6,7 +6,7 @@
  * @module report
  */
 
-export { displayUnits } from '../design/index';
+export { checkMessage, displayUnits } from '../design/core';
 export { renderChart } from './chart';
 export { type ChartFromReportOptions, chartSpecFromReport } from './chart-from-report';
 export type {
@@ -17,6 +17,7 @@ export type {
   ChartSeries,
   ChartSpec,
 } from './chart-spec';
+export { type HtmlOptions, renderHtml } from './html';
 export {
   type JsonCandidate,
   type JsonCaseDuty,
@@ -27,6 +28,7 @@ export {
   type JsonCurves,
   type JsonEndPressure,
   type JsonEnvelope,
+  type JsonFluid,
   type JsonMotor,
   type JsonOptions,
   type JsonQuantity,

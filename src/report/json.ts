@@ -11,10 +11,13 @@ import type {
   Check,
   DesignReport,
   DisplayUnits,
+  ReportFluid,
+  RunInputSummary,
   SampledCurve,
   UnitSystem,
-} from '../design/index';
-import { displayUnits } from '../design/index';
+} from '../design/core';
+import { checkMessage, displayUnits } from '../design/core';
+import { moreUnits } from '../design/say';
 import type { FitReport, MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
 import {
@@ -29,7 +32,7 @@ import {
 import { chosenUnits } from './format-values';
 
 /** The `format` tag of the envelope; the number changes when the shape changes incompatibly. */
-export const REPORT_FORMAT = 'headflow-report/1';
+export const REPORT_FORMAT = 'headflow-report/2';
 
 /** Significant digits of every number written. */
 const DIGITS = 6;
@@ -64,9 +67,21 @@ export interface JsonCheck {
   readonly severity: Check['severity'];
   readonly candidate: string | null;
   readonly case: string | null;
+  /** The message in the document's unit system. */
   readonly message: string;
   readonly source: string;
   readonly siValues: Readonly<Record<string, number | null>>;
+  /** The words behind the message (names, reasons). */
+  readonly words: Readonly<Record<string, string>>;
+}
+
+/** The liquid in one case. */
+export interface JsonFluid {
+  readonly name: string;
+  readonly temperature: JsonQuantity | null;
+  readonly density: JsonQuantity | null;
+  readonly kinematicViscosity: JsonQuantity | null;
+  readonly vaporPressure: JsonQuantity | null;
 }
 
 /** One run's figures at the duty flow. */
@@ -90,6 +105,14 @@ export interface JsonRun {
 /** The duty in one operating case. */
 export interface JsonCaseDuty {
   readonly case: string;
+  readonly fluid: JsonFluid;
+  readonly aged: boolean;
+  readonly suctionElevation: JsonQuantity | null;
+  readonly dischargeElevation: JsonQuantity | null;
+  /** NPSH available in its terms (heads in the head unit), or null. */
+  readonly npshTerms: Readonly<Record<string, JsonQuantity | null>> | null;
+  /** Static pressure just after the pump at the duty: absolute and gauge. */
+  readonly pumpDischargePressure: JsonEndPressure | null;
   readonly head: JsonQuantity | null;
   readonly staticHead: JsonQuantity | null;
   readonly lossHead: JsonQuantity | null;
@@ -123,6 +146,10 @@ export interface JsonCaseResult {
   readonly npshRequired: JsonQuantity | null;
   readonly npshRatio: number | null;
   readonly velocities: readonly { readonly run: string; readonly velocity: JsonQuantity | null }[];
+  /** Electrical input power of the set. */
+  readonly inputPower: JsonQuantity | null;
+  /** Electrical energy per volume pumped, kWh/m3 (SI) or kWh/kgal (US: per 1000 gallons). */
+  readonly specificEnergy: JsonQuantity | null;
   readonly iterations: number;
 }
 
@@ -165,10 +192,24 @@ export interface JsonCandidate {
   readonly dutyOnlyMotor: JsonMotor | null;
   readonly energy: {
     readonly yearly: JsonQuantity | null;
+    /** `'throttle'` (full speed, throttled to each flow) or `'speed'` (speed-controlled). */
+    readonly control: 'throttle' | 'speed';
+    readonly hours: number;
     readonly cost: { readonly amount: number | null; readonly currency: string } | null;
   } | null;
   /** Fits of the head curve and (when efficiency is given) of the efficiency curve. */
   readonly curveFit: { readonly head: JsonCurveFit; readonly efficiency: JsonCurveFit | null };
+  /** The catalogue points of one pump, at `ratedSpeed`. */
+  readonly catalogue: {
+    readonly ratedSpeed: JsonQuantity | null;
+    readonly maxSpeed: JsonQuantity | null;
+    readonly points: readonly {
+      readonly flow: JsonQuantity | null;
+      readonly head: JsonQuantity | null;
+      readonly efficiency: number | null;
+      readonly npshRequired: JsonQuantity | null;
+    }[];
+  };
   readonly checks: readonly JsonCheck[];
 }
 
@@ -196,7 +237,14 @@ export interface JsonReport {
   readonly name: string;
   readonly units: UnitSystem;
   readonly passed: boolean;
-  readonly fluid: string;
+  /** How many candidates pass and which is recommended. */
+  readonly verdict: {
+    readonly candidates: number;
+    readonly passing: number;
+    readonly recommended: string | null;
+    readonly passed: boolean;
+  };
+  readonly fluid: JsonFluid;
   readonly dutyFlow: JsonQuantity | null;
   /** Atmospheric pressure at the site (absolute), against which gauge pressures are given. */
   readonly atmosphere: JsonQuantity | null;
@@ -204,7 +252,13 @@ export interface JsonReport {
   readonly candidates: readonly JsonCandidate[];
   readonly checks: readonly JsonCheck[];
   readonly cautions: readonly string[];
-  readonly curves: JsonCurves;
+  /** The runs as given (in the design case), and the duty profile. */
+  readonly inputs: {
+    readonly runs: readonly Readonly<Record<string, unknown>>[];
+    readonly profile: readonly { readonly flow: JsonQuantity | null; readonly hours: number }[];
+  };
+  /** The chart's curves, when the report was evaluated with them; else null. */
+  readonly curves: JsonCurves | null;
 }
 
 /** The whole JSON document. */
@@ -239,7 +293,7 @@ function curve(c: SampledCurve, flowUnit: string, valueUnit: string, toValue: nu
   };
 }
 
-function check(c: Check): JsonCheck {
+function check(c: Check, system: UnitSystem): JsonCheck {
   const siValues: Record<string, number | null> = {};
   for (const [k, v] of Object.entries(c.values)) siValues[k] = round(v);
   return {
@@ -247,9 +301,21 @@ function check(c: Check): JsonCheck {
     severity: c.severity,
     candidate: c.candidate ?? null,
     case: c.case ?? null,
-    message: c.message,
+    message: checkMessage(c, system),
     source: c.source,
     siValues,
+    words: { ...(c.words ?? {}) },
+  };
+}
+
+function fluid(f: ReportFluid, system: UnitSystem): JsonFluid {
+  const m = moreUnits(system);
+  return {
+    name: f.name,
+    temperature: quantity(f.temperature, m.temperature),
+    density: quantity(f.density, m.density),
+    kinematicViscosity: quantity(f.kinematicViscosity, m.kinematicViscosity),
+    vaporPressure: quantity(f.vaporPressure, displayUnits(system).pressure),
   };
 }
 
@@ -279,9 +345,34 @@ function endPressure(p: Pressure, atmosphere: Pressure, u: DisplayUnits): JsonEn
   };
 }
 
-function duty(d: CaseDuty, atmosphere: Pressure, u: DisplayUnits): JsonCaseDuty {
+function duty(
+  d: CaseDuty,
+  atmosphere: Pressure,
+  u: DisplayUnits,
+  system: UnitSystem,
+): JsonCaseDuty {
+  const t = d.npshTerms;
   return {
     case: d.case,
+    fluid: fluid(d.fluid, system),
+    aged: d.aged,
+    suctionElevation: quantity(d.suctionElevation, u.length),
+    dischargeElevation: quantity(d.dischargeElevation, u.length),
+    npshTerms:
+      t === undefined
+        ? null
+        : {
+            surfacePressureHead: quantity(t.surfacePressureHead, u.head),
+            vaporPressureHead: quantity(t.vaporPressureHead, u.head),
+            staticHeight: quantity(t.staticHeight, u.head),
+            suctionLoss: quantity(t.suctionLoss, u.head),
+            velocityHead: quantity(t.velocityHead, u.head),
+            total: quantity(t.total, u.head),
+          },
+    pumpDischargePressure:
+      d.pumpDischargePressure === undefined
+        ? null
+        : endPressure(d.pumpDischargePressure, atmosphere, u),
     head: quantity(d.head, u.head),
     staticHead: quantity(d.staticHead, u.head),
     lossHead: quantity(d.lossHead, u.head),
@@ -292,7 +383,14 @@ function duty(d: CaseDuty, atmosphere: Pressure, u: DisplayUnits): JsonCaseDuty 
   };
 }
 
-function caseResult(r: CaseResult, u: DisplayUnits): JsonCaseResult {
+function caseResult(r: CaseResult, u: DisplayUnits, system: UnitSystem): JsonCaseResult {
+  const perM3 = r.specificEnergy === undefined ? undefined : r.specificEnergy / 3.6e6;
+  const specific =
+    perM3 === undefined
+      ? null
+      : system === 'us'
+        ? { value: round(perM3 * 3.785411784) ?? 0, unit: 'kWh/kgal' }
+        : { value: round(perM3) ?? 0, unit: 'kWh/m3' };
   return {
     case: r.case,
     failure: r.failure ?? null,
@@ -310,6 +408,8 @@ function caseResult(r: CaseResult, u: DisplayUnits): JsonCaseResult {
       run: v.run,
       velocity: quantity(v.velocity, u.velocity),
     })),
+    inputPower: quantity(r.inputPower, u.power),
+    specificEnergy: specific,
     iterations: r.iterations,
   };
 }
@@ -338,7 +438,7 @@ function curveFit(f: FitReport, maxResidual: JsonQuantity | number | null): Json
   };
 }
 
-function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
+function candidate(c: CandidateReport, u: DisplayUnits, system: UnitSystem): JsonCandidate {
   const e = c.energy;
   const kWh = e === undefined ? null : round(e.kWh);
   return {
@@ -348,7 +448,7 @@ function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
     count: c.count,
     arrangement: c.arrangement,
     control: c.control,
-    cases: c.cases.map((r) => caseResult(r, u)),
+    cases: c.cases.map((r) => caseResult(r, u, system)),
     maxShaftPower: quantity(c.maxShaftPower, u.power),
     motor: motor(c.motor, u),
     dutyOnlyMotor: motor(c.dutyOnlyMotor, u),
@@ -357,6 +457,8 @@ function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
         ? null
         : {
             yearly: kWh === null ? null : { value: kWh, unit: 'kWh' },
+            control: e.control,
+            hours: e.hours,
             cost:
               e.cost === undefined
                 ? null
@@ -369,12 +471,23 @@ function candidate(c: CandidateReport, u: DisplayUnits): JsonCandidate {
           ? null
           : curveFit(c.curveFit.efficiency, round(c.curveFit.efficiency.maxResidual)),
     },
-    checks: c.checks.map(check),
+    catalogue: {
+      ratedSpeed: quantity(c.pump.ratedSpeed, u.speed),
+      maxSpeed: quantity(c.pump.maxSpeed, u.speed),
+      points: c.pump.points.map((p) => ({
+        flow: quantity(p.flow, u.flow),
+        head: quantity(p.head, u.head),
+        efficiency: round(p.efficiency),
+        npshRequired: quantity(p.npshRequired, u.head),
+      })),
+    },
+    checks: c.checks.map((k) => check(k, system)),
   };
 }
 
-function curves(report: DesignReport, u: DisplayUnits): JsonCurves {
+function curves(report: DesignReport, u: DisplayUnits): JsonCurves | null {
   const c = report.curves;
+  if (c === undefined) return null;
   const head = 1 / convert(1, u.head, 'm');
   return {
     systems: c.systems.map((s) => curve(s, u.flow, u.head, head)),
@@ -392,6 +505,25 @@ function curves(report: DesignReport, u: DisplayUnits): JsonCurves {
       flow: quantity(si<'flow'>(p.flow), u.flow),
       head: quantity(si<'length'>(p.head), u.head),
     })),
+  };
+}
+
+function runInput(r: RunInputSummary, system: UnitSystem): Readonly<Record<string, unknown>> {
+  const u = displayUnits(system);
+  const m = moreUnits(system);
+  return {
+    name: r.name,
+    group: r.group ?? null,
+    size: r.size ?? null,
+    insideDiameter: quantity(r.insideDiameter, m.diameter),
+    length: quantity(r.length, u.length),
+    material: r.material ?? null,
+    roughness: quantity(r.roughness, m.roughness),
+    agedRoughness: quantity(r.agedRoughness, m.roughness),
+    fittings: r.fittings.map((f) => ({ ...f, k: round(f.k) })),
+    valves: r.valves.map((v) => ({ ...v, k: round(v.k) })),
+    equipment: r.equipment.map((e) => ({ name: e.name, loss: quantity(e.loss, u.head) })),
+    elevationChange: quantity(r.elevationChange, u.length),
   };
 }
 
@@ -420,13 +552,26 @@ export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnv
       name: report.name,
       units: system,
       passed: report.passed,
-      fluid: report.fluid,
+      verdict: {
+        candidates: report.verdict.candidates,
+        passing: report.verdict.passing,
+        recommended: report.verdict.recommended ?? null,
+        passed: report.verdict.passed,
+      },
+      fluid: fluid(report.fluid, system),
       dutyFlow: quantity(report.dutyFlow, u.flow),
       atmosphere: quantity(report.atmosphere, u.pressure),
-      duty: report.duty.map((d) => duty(d, report.atmosphere, u)),
-      candidates: report.candidates.map((c) => candidate(c, u)),
-      checks: report.checks.map(check),
+      duty: report.duty.map((d) => duty(d, report.atmosphere, u, system)),
+      candidates: report.candidates.map((c) => candidate(c, u, system)),
+      checks: report.checks.map((k) => check(k, system)),
       cautions: [...report.cautions],
+      inputs: {
+        runs: report.inputs.runs.map((r) => runInput(r, system)),
+        profile: report.inputs.profile.map((p) => ({
+          flow: quantity(p.flow, u.flow),
+          hours: p.hours,
+        })),
+      },
       curves: curves(report, u),
     },
   };

@@ -4,7 +4,8 @@
  *
  * @module
  */
-import type { DesignReport, UnitSystem } from '../design/index';
+import type { DesignReport, UnitSystem } from '../design/core';
+import { guardBoolean } from '../guards';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits } from './format-values';
 
@@ -12,6 +13,8 @@ import { chosenUnits } from './format-values';
 export interface MarkdownOptions {
   /** Units to print in; default the report's own (`report.units`). */
   readonly units?: UnitSystem;
+  /** The short form instead of the full calculation sheet; default false. */
+  readonly summary?: boolean;
 }
 
 /**
@@ -87,6 +90,10 @@ function blockLines(block: Block): string[] {
  */
 export function renderMarkdown(report: DesignReport, options: MarkdownOptions = {}): string {
   const system = chosenUnits(report, options.units);
-  const chunks = reportBlocks(report, system).map((b) => blockLines(b).join('\n'));
+  const summary =
+    options.summary === undefined ? false : guardBoolean('options.summary', options.summary);
+  const chunks = reportBlocks(report, system, { style: 'unicode', summary }).map((b) =>
+    blockLines(b).join('\n'),
+  );
   return `${chunks.join('\n\n')}\n`;
 }

@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { displayUnits, type UnitSystem } from '../design/index';
+import { displayUnits, type UnitSystem } from '../design/core';
 import {
   guardArray,
   guardInteger,

@@ -4,8 +4,9 @@
  *
  * @module
  */
-import type { DesignReport, UnitSystem } from '../design/index';
+import type { DesignReport, UnitSystem } from '../design/core';
 import { argumentError } from '../errors';
+import { guardBoolean } from '../guards';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits, oneLine } from './format-values';
 
@@ -15,6 +16,11 @@ export interface TextOptions {
   readonly units?: UnitSystem;
   /** Longest line, in characters: an integer >= 40 (default 100). */
   readonly width?: number;
+  /**
+   * The short form (verdict, duty, candidates, ranking, checks, cautions) instead of the full
+   * calculation sheet; default false.
+   */
+  readonly summary?: boolean;
 }
 
 /** Default line width. */
@@ -217,7 +223,9 @@ export function renderText(report: DesignReport, options: TextOptions = {}): str
       `an integer >= ${MIN_WIDTH}`,
     );
   }
-  const blocks = reportBlocks(report, system).map((b) =>
+  const summary =
+    options.summary === undefined ? false : guardBoolean('options.summary', options.summary);
+  const blocks = reportBlocks(report, system, { style: 'ascii', summary }).map((b) =>
     blockLines(b, width)
       .map((l) => l.trimEnd())
       .join('\n'),

@@ -246,7 +246,8 @@ function check(
   values: Record<string, number>,
   source: string,
 ): Check {
-  return { id, severity, candidate, case: caseName, message, values, source };
+  // Percentages and rpm read the same in both unit systems, so the message is kept as written.
+  return { id, severity, candidate, case: caseName, message, values, words: {}, source };
 }
 
 /** The selection's own checks of a way (trim law range, drive speed range). */

@@ -98,6 +98,11 @@ describe('headflow select', () => {
     const bad = memoryIo({ ...files, 'bad.json': '{"format": "headflow-pump-catalogue/1"}' });
     expect(await runCli(['select', 'lift.json', '-c', 'bad.json'], bad.io)).toBe(EXIT.invalidInput);
     expect(bad.err()).toContain('pumps: this field is required');
+    const html = memoryIo(files);
+    expect(await runCli(['select', 'lift.json', '-c', 'pumps.json', '-f', 'html'], html.io)).toBe(
+      EXIT.invalidInput,
+    );
+    expect(html.err()).toContain('--format html is for evaluate');
   });
 
   it('keeps evaluate and the bare form alike', async () => {

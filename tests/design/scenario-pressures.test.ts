@@ -193,10 +193,10 @@ describe("the report echoes every end's pressure both ways", () => {
     expect(report.duty[0]?.suctionPressure).toBe(95000);
     expectRelative(report.duty[0]?.dischargePressure ?? 0, 30 * 6894.757293168361, 1e-15);
     const text = renderText(report);
-    expect(text).toContain('End pressures by operating case');
+    expect(text).toContain('Ends by operating case');
     expect(text).toContain('Atmosphere: 95.00 kPa abs');
     // 30 psi absolute = 206.8 kPa; as gauge against 95 kPa: 111.8 kPa.
-    expect(text).toMatch(/small loop\s+95\.00\s+0\s+206\.8\s+111\.8/);
+    expect(text).toMatch(/small loop\s+\S+\s+95\.00\s+0\.000\s+\S+\s+206\.8\s+111\.8/);
     const json = JSON.parse(renderJson(report));
     expect(json.report.atmosphere).toEqual({ value: 95, unit: 'kPa' });
     expect(json.report.duty[0].dischargePressure.gauge.value).toBeCloseTo(111.843, 3);

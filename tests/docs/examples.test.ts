@@ -69,10 +69,16 @@ describe('examples run and print what their comments say', () => {
     log.mockRestore();
     expect(text).toMatch(/^Pump selection report: Canal lift to hillside tank/);
     expect(text).toContain('licensed engineer');
-    expect(text).toContain('Chart written to .demo/canal-lift.svg');
+    expect(text).toContain(
+      'HTML report written to .demo/canal-lift.html, chart to .demo/canal-lift.svg',
+    );
     const svg = read('.demo/canal-lift.svg');
     expect(svg.startsWith('<?xml') || svg.startsWith('<svg')).toBe(true);
     expect(svg.trimEnd().endsWith('</svg>')).toBe(true);
+    expect(read('.demo/canal-lift.html').startsWith('<!doctype html>')).toBe(true);
+    // The README quotes the sheet's first lines: they must be what the demo prints.
+    const head = text.split('\n').slice(0, 10).join('\n');
+    expect(read('README.md')).toContain(head);
   });
 });
 

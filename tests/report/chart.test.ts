@@ -335,15 +335,17 @@ describe('renderChart: the document', () => {
       xmlns: 'http://www.w3.org/2000/svg',
       version: '1.1',
       width: '800',
-      height: '600',
-      viewBox: '0 0 800 600',
     });
+    // The drawing grows below its legend and key when they need the room.
+    const h = Number(root?.attrs['height']);
+    expect(h).toBeGreaterThanOrEqual(600);
+    expect(root?.attrs['viewBox']).toBe(`0 0 800 ${root?.attrs['height']}`);
     expect(els.find((e) => e.tag === 'title')?.text).toBe(sample.title);
     expect(svg).not.toContain('NaN');
   });
 
   it('takes its size from the options', () => {
-    const root = elements(renderChart(sample, { width: 1024.5, height: 700 }))[0];
+    const root = elements(renderChart(minimal, { width: 1024.5, height: 700 }))[0];
     expect(root?.attrs).toMatchObject({
       width: '1024.5',
       height: '700',
@@ -377,14 +379,20 @@ describe('renderChart: the document', () => {
   });
 
   it('labels every operating point and lists every series in the legend', () => {
-    const labels = els.filter((e) => e.within.includes('operating-point-labels'));
-    expect(labels.map((e) => e.text)).toEqual(sample.operatingPoints.map((m) => m.name));
-    const legend = byClass(els, 'legend-item');
-    const entries = 3 + 2 + 2 + 2 + 2 + 2 + 1; // series, bands and one operating-point entry
-    expect(legend.length).toBe(entries);
-    const texts = els.filter((e) => e.tag === 'text' && e.within.includes('legend-item'));
-    expect(texts.map((e) => e.text)).toContain('low reservoir, aged pipe (system)');
-    expect(texts.map((e) => e.text)).toContain('candidate B (preferred region)');
+    // Operating points are numbered on the plot and named in the key under the legend.
+    const labels = byClass(els, 'point-label');
+    expect(labels.map((e) => e.text)).toEqual(sample.operatingPoints.map((_, i) => String(i + 1)));
+    const key = byClass(els, 'key-text')
+      .map((e) => e.text)
+      .join(' ');
+    for (const m of sample.operatingPoints) expect(key).toContain(`${m.name}:`);
+    const legend = byClass(els, 'legend-text')
+      .map((e) => e.text)
+      .join(' ');
+    expect(legend).toContain('low reservoir, aged pipe: system curve');
+    for (const s of [...sample.systemCurves, ...(sample.npshAvailable ?? [])]) {
+      expect(legend).toContain(s.name);
+    }
   });
 
   it('labels the axes in the chosen units', () => {
@@ -394,7 +402,7 @@ describe('renderChart: the document', () => {
     const us = { ...sample, units: { flow: 'gal/min', head: 'ft' } } as const;
     expect(labelsOf(us)).toEqual(['Head (ft)', 'Efficiency (%)', 'NPSH (ft)', 'Flow (gal/min)']);
     // Without efficiency or NPSH curves there is no secondary axis and no lower panel.
-    expect(labelsOf(minimal)).toEqual(['Head (m)', 'Flow (m3/h)']);
+    expect(labelsOf(minimal)).toEqual(['Head (m)', 'Flow (m³/h)']);
   });
 
   it('runs the axes from 0 to the niced largest value, with d3 ticks', () => {
@@ -521,14 +529,16 @@ describe('renderChart: escaping', () => {
     expect(name).toBe('a\tb\nc\uFFFDd\uFFFDe\uFFFDf\uFFFDg \u{1F600}');
   });
 
-  it('shortens long names in labels and the legend but keeps them whole in data-name', () => {
-    const long = 'x'.repeat(60);
+  it('wraps long names in the key and the legend, never cutting them short', () => {
+    const long = 'x'.repeat(150);
     const out = elements(
       renderChart({ ...minimal, operatingPoints: [{ name: long, flow: 0.005, head: 15 }] }),
     );
     expect(byClass(out, 'operating-point')[0]?.attrs['data-name']).toBe(long);
-    const label = out.find((e) => e.within.includes('operating-point-labels'));
-    expect(label?.text).toBe(`${'x'.repeat(39)}\u2026`);
+    const key = byClass(out, 'key-text').map((e) => e.text);
+    expect(key.length).toBeGreaterThan(1);
+    expect(key.join('')).toContain(long);
+    expect(out.some((e) => (e.text ?? '').includes('\u2026'))).toBe(false);
   });
 });
 
@@ -648,6 +658,8 @@ describe('colour groups', () => {
     expect(stroke('pump-curve', 'A reduced')).toBe(stroke('pump-curve', 'A full speed'));
     expect(stroke('pump-curve', 'B')).not.toBe(stroke('pump-curve', 'A full speed'));
     expect(stroke('efficiency-curve', 'B eff')).toBe(stroke('pump-curve', 'B'));
-    expect(stroke('preferred-region', 'A region')).toBe(stroke('pump-curve', 'A full speed'));
+    const fill = byClass(els, 'preferred-region').find((e) => e.attrs['data-name'] === 'A region')
+      ?.attrs['fill'];
+    expect(fill).toBe(stroke('pump-curve', 'A full speed'));
   });
 });

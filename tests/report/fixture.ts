@@ -16,6 +16,7 @@ import type {
   CaseDuty,
   Check,
   DesignReport,
+  ReportCurves,
   SampledCurve,
 } from '../../src/design/index';
 import type { RunDetails } from '../../src/system/index';
@@ -61,9 +62,29 @@ function run(name: string, flow: number, d: number, loss: number, rise: number):
   };
 }
 
+const FLUID = {
+  name: 'water',
+  temperature: q(30, 'degC'),
+  density: q(996, 'kg/m3'),
+  kinematicViscosity: q(0.8, 'mm2/s'),
+  vaporPressure: q(4.25, 'kPa'),
+};
+
+function caseExtras(head: number) {
+  return {
+    fluid: FLUID,
+    aged: false,
+    suctionElevation: q(2, 'm'),
+    dischargeElevation: q(14, 'm'),
+    npshTerms: undefined,
+    pumpDischargePressure: q(101.325 + head * 9.767, 'kPa'),
+  };
+}
+
 const duty: CaseDuty[] = [
   {
     case: DESIGN_CASE,
+    ...caseExtras(q(30, 'm')),
     head: q(30, 'm'),
     staticHead: q(12, 'm'),
     lossHead: q(18, 'm'),
@@ -74,6 +95,8 @@ const duty: CaseDuty[] = [
   },
   {
     case: AGED_CASE,
+    ...caseExtras(q(38, 'm')),
+    aged: true,
     head: q(38, 'm'),
     staticHead: q(14.5, 'm'),
     lossHead: q(23.5, 'm'),
@@ -93,6 +116,7 @@ const checksA: Check[] = [
     message: 'Runs at 97 % of its best-efficiency flow, inside the preferred region.',
     values: { percentOfBep: 97.26 },
     source: 'ANSI/HI 9.6.3',
+    words: {},
   },
 ];
 
@@ -105,6 +129,7 @@ const checksB: Check[] = [
     message: 'The set cannot deliver the duty flow in this case even at its maximum speed.',
     values: { requiredHead: 38, availableHead: 34.72 },
     source: 'common practice',
+    words: {},
   },
   {
     id: 'npsh-data',
@@ -114,8 +139,20 @@ const checksB: Check[] = [
     message: 'The curve has no NPSH required data, so cavitation was not checked.',
     values: {},
     source: 'ANSI/HI 9.6.1',
+    words: {},
   },
 ];
+
+const PUMP = {
+  points: [],
+  ratedSpeed: q(1480, 'rpm'),
+  speed: q(1480, 'rpm'),
+  maxSpeed: q(1480, 'rpm'),
+  motorEfficiency: 0.94,
+  driveEfficiency: undefined,
+  motorSeries: 'iec' as const,
+  bep: undefined,
+};
 
 const candidateA: CandidateReport = {
   name: 'candidate A',
@@ -140,6 +177,8 @@ const candidateA: CandidateReport = {
         { run: 'suction', velocity: q(1.593, 'm/s') },
         { run: 'discharge', velocity: q(2.489, 'm/s') },
       ],
+      inputPower: undefined,
+      specificEnergy: undefined,
       iterations: 7,
     },
     {
@@ -159,6 +198,8 @@ const candidateA: CandidateReport = {
         { run: 'suction', velocity: q(1.404, 'm/s') },
         { run: 'discharge', velocity: q(2.194, 'm/s') },
       ],
+      inputPower: undefined,
+      specificEnergy: undefined,
       iterations: 8,
     },
   ],
@@ -179,7 +220,13 @@ const candidateA: CandidateReport = {
     loadFraction: 29430 / 30000,
     serviceFactor: 1,
   },
-  energy: { kWh: 274260, cost: { amount: 32911.2, currency: 'EUR' } },
+  energy: {
+    kWh: 274260,
+    cost: { amount: 32911.2, currency: 'EUR' },
+    control: 'throttle',
+    hours: 8760,
+  },
+  pump: PUMP,
   curveFit: {
     head: {
       method: 'monotone',
@@ -231,6 +278,8 @@ const candidateB: CandidateReport = {
       npshRequired: undefined,
       npshRatio: undefined,
       velocities: [],
+      inputPower: undefined,
+      specificEnergy: undefined,
       iterations: 15,
     },
     {
@@ -248,6 +297,8 @@ const candidateB: CandidateReport = {
       npshRequired: undefined,
       npshRatio: undefined,
       velocities: [],
+      inputPower: undefined,
+      specificEnergy: undefined,
       iterations: 12,
     },
   ],
@@ -269,6 +320,7 @@ const candidateB: CandidateReport = {
     serviceFactor: 1.15,
   },
   energy: undefined,
+  pump: { ...PUMP, maxSpeed: q(1480, 'rpm') },
   curveFit: {
     head: {
       method: 'polynomial',
@@ -288,12 +340,39 @@ const candidateB: CandidateReport = {
   rank: 2,
 };
 
+/** The invented report's curves. */
+export const CURVES: ReportCurves = {
+  systems: [sample(DESIGN_CASE, systemDesign), sample(AGED_CASE, systemAged)],
+  pumps: [
+    sample('candidate A', pumpA),
+    sample('candidate B at 1390 rpm', (x) => pumpB(x, 1390), 0.1),
+    sample('candidate B at 1480 rpm', (x) => pumpB(x, 1480), 0.1),
+  ],
+  efficiency: [
+    sample('candidate A', (x) => Math.max(0, effA(x))),
+    sample('candidate B', (x) => Math.max(0, effB(x))),
+  ],
+  npshRequired: [sample('candidate A', npshrA)],
+  npshAvailable: [sample(DESIGN_CASE, npshaDesign), sample(AGED_CASE, npshaAged)],
+  preferredRegions: [
+    { name: 'candidate A', minFlow: 0.7 * 0.0804, maxFlow: 1.2 * 0.0804 },
+    { name: 'candidate B', minFlow: 0.7 * 0.1053, maxFlow: 1.2 * 0.1053 },
+  ],
+  points: [
+    { name: `candidate A / ${DESIGN_CASE}`, flow: 0.0782, head: 31.57 },
+    { name: `candidate A / ${AGED_CASE}`, flow: 0.06892, head: 34.34 },
+    { name: `candidate B / ${DESIGN_CASE}`, flow: 0.075, head: 30 },
+  ],
+};
+
 /** The whole invented report (SI numbers, printed in SI by default). */
 export const REPORT: DesignReport = {
   name: 'Process cooling loop, invented test bay',
   units: 'si',
   dutyFlow: q(QD, 'm3/s'),
-  fluid: 'water at 30 degC',
+  fluid: FLUID,
+  verdict: { candidates: 2, passing: 1, recommended: 'candidate A', passed: true },
+  inputs: { runs: [], pumpLocation: undefined, profile: [], energyPrice: undefined },
   atmosphere: q(101.325, 'kPa'),
   duty,
   candidates: [candidateA, candidateB],
@@ -306,6 +385,7 @@ export const REPORT: DesignReport = {
       message: 'Suction velocity 2.6 m/s is above the usual range (up to 2.4 m/s).',
       values: { velocity: 2.6, max: 2.4 },
       source: 'common practice',
+      words: {},
     },
   ],
   cautions: [
@@ -314,27 +394,5 @@ export const REPORT: DesignReport = {
     'Results support, and do not replace, licensed engineering judgement and local codes.',
   ],
   passed: false,
-  curves: {
-    systems: [sample(DESIGN_CASE, systemDesign), sample(AGED_CASE, systemAged)],
-    pumps: [
-      sample('candidate A', pumpA),
-      sample('candidate B at 1390 rpm', (x) => pumpB(x, 1390), 0.1),
-      sample('candidate B at 1480 rpm', (x) => pumpB(x, 1480), 0.1),
-    ],
-    efficiency: [
-      sample('candidate A', (x) => Math.max(0, effA(x))),
-      sample('candidate B', (x) => Math.max(0, effB(x))),
-    ],
-    npshRequired: [sample('candidate A', npshrA)],
-    npshAvailable: [sample(DESIGN_CASE, npshaDesign), sample(AGED_CASE, npshaAged)],
-    preferredRegions: [
-      { name: 'candidate A', minFlow: 0.7 * 0.0804, maxFlow: 1.2 * 0.0804 },
-      { name: 'candidate B', minFlow: 0.7 * 0.1053, maxFlow: 1.2 * 0.1053 },
-    ],
-    points: [
-      { name: `candidate A / ${DESIGN_CASE}`, flow: 0.0782, head: 31.57 },
-      { name: `candidate A / ${AGED_CASE}`, flow: 0.06892, head: 34.34 },
-      { name: `candidate B / ${DESIGN_CASE}`, flow: 0.075, head: 30 },
-    ],
-  },
+  curves: CURVES,
 };

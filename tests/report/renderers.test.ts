@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { XMLValidator } from 'fast-xml-parser';
 import { describe, expect, it, vi } from 'vitest';
 import type { CandidateReport, DesignReport } from '../../src/design/index';
-import { displayUnits } from '../../src/report';
+import { checkMessage, displayUnits } from '../../src/report';
 import { chartSpecFromReport } from '../../src/report/chart-from-report';
 import {
   formatGrouped,
@@ -12,6 +12,7 @@ import {
 } from '../../src/report/format-values';
 import { renderChart } from '../../src/report/index';
 import {
+  type JsonCurves,
   type JsonEnvelope,
   type JsonQuantity,
   renderJson,
@@ -21,7 +22,7 @@ import { renderMarkdown } from '../../src/report/markdown';
 import { renderText } from '../../src/report/text';
 import { isUnit, q, si } from '../../src/units/index';
 import { expectHeadflowError, expectRelative } from '../helpers/expect';
-import { AGED_CASE, DESIGN_CASE, REPORT } from './fixture';
+import { AGED_CASE, CURVES, DESIGN_CASE, REPORT } from './fixture';
 
 // Conversion factors to SI written out here, independently of the units module (NIST SP 811,
 // Appendix B: exact definitions of the foot, the US gallon, the pound and standard gravity).
@@ -106,9 +107,10 @@ describe('special values and bad options', () => {
     expect(formatNumber(undefined)).toBe('-');
     expect(formatNumber(Number.NaN)).toBe('-');
     expect(formatNumber(Number.NEGATIVE_INFINITY)).toBe('-');
-    expect(formatNumber(0)).toBe('0');
-    expect(formatNumber(-0)).toBe('0');
-    expect(formatNumber(-1e-9)).toBe('0'); // below the six decimals kept
+    // Zero keeps the decimals of its column's neighbours.
+    expect(formatNumber(0)).toBe('0.000');
+    expect(formatNumber(-0)).toBe('0.000');
+    expect(formatNumber(-1e-9)).toBe('0.000000'); // below the six decimals kept
     expect(formatNumber(12)).toBe('12.00');
     expect(formatNumber(9.9996)).toBe('10.00'); // rounding carries into a new digit
     expect(formatNumber(123456)).toBe('123456');
@@ -152,7 +154,7 @@ describe('special values and bad options', () => {
       yearly: null,
       cost: { amount: null, currency: 'EUR' },
     });
-    expect(row(renderText(broken), DESIGN_CASE)[2]).toBe('-'); // total head
+    expect(row(renderText(broken, { summary: true }), DESIGN_CASE)[2]).toBe('-'); // total head
   });
 
   it('refuses widths that are not integers >= 40 and unknown unit systems', () => {
@@ -204,8 +206,9 @@ describe('display units', () => {
 });
 
 describe('text report', () => {
-  const si = renderText(REPORT);
-  const us = renderText(REPORT, { units: 'us', width: 120 });
+  // The short form: the tables these checks read (the full sheet is tested in sheet.test.ts).
+  const si = renderText(REPORT, { summary: true });
+  const us = renderText(REPORT, { units: 'us', width: 120, summary: true });
 
   it('prints the duty flow and the duty table in the chosen units', () => {
     // 0.075 m3/s x 3600 = 270.0 m3/h; 0.075 / (3.785411784e-3 / 60) = 1188.8 gal/min.
@@ -214,27 +217,49 @@ describe('text report', () => {
     expectRelative(0.075 / M3H, 270.0, 5e-4);
     expectRelative(0.075 / GPM, 1189, 5e-4);
     // Static, losses, total, NPSHa: 12, 18, 30, 9.5 m; in ft: / 0.3048.
-    expect(row(si, DESIGN_CASE)).toEqual(['12.00', '18.00', '30.00', '9.500']);
-    expect(row(us, DESIGN_CASE)).toEqual(['39.37', '59.06', '98.43', '31.17']);
-    expect(row(us, AGED_CASE)).toEqual(['47.57', '77.10', '124.7', '20.34']);
+    // Pump outlet: 101.325 + 30 x 9.767 = 394.3 kPa abs, 293.0 kPa gauge (the fixture's figure).
+    expect(row(si, DESIGN_CASE)).toEqual(['12.00', '18.00', '30.00', '9.500', '394.3', '293.0']);
+    // 394.3 kPa = 57.19 psia, 293.0 kPa = 42.50 psig (psi = 6.894757 kPa, NIST SP 811).
+    expect(row(us, DESIGN_CASE)).toEqual(['39.37', '59.06', '98.43', '31.17', '57.19', '42.50']);
+    expect(row(us, AGED_CASE).slice(0, 4)).toEqual(['47.57', '77.10', '124.7', '20.34']);
   });
 
   it('echoes the pressure of each end both ways, absolute and gauge against the atmosphere', () => {
     // The fixture: open suction at 101.325 kPa, discharge 301.325 kPa absolute, atmosphere
     // 101.325 kPa; 101.325 kPa = 14.696 psi (NIST SP 811: psi = 6.894757 kPa).
-    expect(si).toContain('Atmosphere: 101.3 kPa abs');
-    expect(si).toMatch(/Suction\s+Suction\s+Discharge\s+Discharge/);
-    expect(si).toMatch(/\(kPa abs\)\s+\(kPa gauge\)\s+\(kPa abs\)\s+\(kPa gauge\)/);
-    expect(row(si, DESIGN_CASE, 1)).toEqual(['101.3', '0', '301.3', '200.0']);
-    expect(row(si, AGED_CASE, 1)).toEqual(['101.3', '0', '351.3', '250.0']);
-    expect(us).toMatch(/\(psia\)\s+\(psig\)\s+\(psia\)\s+\(psig\)/);
-    expect(row(us, DESIGN_CASE, 1)).toEqual(['14.70', '0', '43.70', '29.01']);
+    const full = renderText(REPORT);
+    expect(full).toContain('Atmosphere: 101.3 kPa abs');
+    expect(full).toContain('Ends by operating case');
+    expect(full).toMatch(/\(kPa abs\)\s+\(kPa gauge\)\s+\S+\s+\(kPa abs\)\s+\(kPa gauge\)/);
+    // Ends: suction level, abs, gauge, discharge level, abs, gauge, pipe.
+    expect(row(full, DESIGN_CASE, 1)).toEqual([
+      '2.000',
+      '101.3',
+      '0.000',
+      '14.00',
+      '301.3',
+      '200.0',
+      'new',
+    ]);
+    expect(row(full, AGED_CASE, 1)).toEqual([
+      '2.000',
+      '101.3',
+      '0.000',
+      '14.00',
+      '351.3',
+      '250.0',
+      'aged',
+    ]);
+    const fullUs = renderText(REPORT, { units: 'us', width: 120 });
+    expect(fullUs).toMatch(/\(psia\)\s+\(psig\)\s+\S+\s+\(psia\)\s+\(psig\)/);
+    expect(row(fullUs, DESIGN_CASE, 1).slice(1, 3)).toEqual(['14.70', '0.000']);
+    expect(row(fullUs, DESIGN_CASE, 1).slice(4, 6)).toEqual(['43.70', '29.01']);
   });
 
   it('prints each case of each candidate with the expected numbers (SI)', () => {
     // candidate A, design case: 1480 rpm; 0.0782 m3/s = 281.52 m3/h; 31.57 m; 81.94 %;
     // 29 430 W = 29.43 kW; 97.26 % of BEP; NPSHa 9.456 m, NPSHr 4.068 m, ratio 2.324.
-    expect(row(si, DESIGN_CASE, 2)).toEqual([
+    expect(row(si, DESIGN_CASE, 1)).toEqual([
       '1480',
       '281.5',
       '31.57',
@@ -247,23 +272,20 @@ describe('text report', () => {
       '2.32',
     ]);
     // candidate B, design case: no NPSH required data -> dashes for NPSHr and the ratio.
+    // A set of two: the set's figures, then each pump's (per pump: flow, eff., power, % of BEP).
+    expect(row(si, DESIGN_CASE, 2)).toEqual(['1390', '270.0', '30.00', '29.92', '9.500']);
     expect(row(si, DESIGN_CASE, 3)).toEqual([
-      '1390',
-      '270.0',
-      '30.00',
+      '135.0',
       '73.4',
-      '29.92',
+      '14.96',
       '75.8',
       'allowable',
-      '9.500',
       '-',
       '-',
     ]);
     // candidate B, aged case: no operating point -> a dash in every column and the reason.
-    expect(row(si, AGED_CASE, 3)).toEqual(Array(10).fill('-'));
-    expect(folded(si)).toContain(
-      `No operating point in case "${AGED_CASE}": at its maximum speed of 1480 rpm the set gives 34.72 m`,
-    );
+    expect(row(si, AGED_CASE, 3)).toEqual(Array(7).fill('-'));
+    expect(folded(si)).toContain(`Case "${AGED_CASE}": No operating point:`);
   });
 
   it('prints each case in US units, converted independently', () => {
@@ -271,7 +293,7 @@ describe('text report', () => {
     if (a?.flow === undefined || a.head === undefined || a.shaftPower === undefined) {
       return expect.fail('fixture');
     }
-    const cells = row(us, DESIGN_CASE, 2);
+    const cells = row(us, DESIGN_CASE, 1);
     // 0.0782 m3/s = 1239.5 gal/min; 31.57 m = 103.58 ft; 29 430 W = 39.466 hp;
     // NPSHa 9.456 m = 31.02 ft; NPSHr 4.068 m = 13.35 ft.
     expect(cells).toEqual([
@@ -302,23 +324,24 @@ describe('text report', () => {
       'Duty-only motor per pump: 30 kW, IEC 60072-1 series; load 98.1 % at the duty',
     );
     // 25 hp = 18.64 kW; 17 800 W / 18 642 W = 95.5 %; 14 960 W / 14 914 W = 100.3 % within SF 1.15.
-    expect(folded(si)).toContain('25 hp (18.64 kW), NEMA MG 1 series; load 95.5 %');
+    expect(folded(si)).toContain('18.6 kW (25 hp), NEMA MG 1 series; load 95.5 %');
     expect(folded(si)).toContain('load 100.3 % at the duty, relying on service factor 1.15');
     // In US units the IEC motor is also given in hp: 37 kW / 745.7 W/hp = 49.62 hp.
-    expect(folded(us)).toContain('37 kW (49.62 hp), IEC 60072-1 series');
+    expect(folded(us)).toContain('49.6 hp (37 kW), IEC 60072-1 series');
     expectRelative(37000 / HP, 49.62, 5e-4);
-    expect(si).toContain('Yearly energy (design case): 274,260 kWh');
+    expect(si).toContain('Yearly energy: 274,260 kWh');
     expect(si).toContain('Yearly energy cost: 32,911 EUR');
-    expect(si).toContain('Yearly energy (design case): -');
+    expect(si).toContain('Yearly energy: -');
     const unsized = renderText(withCandidate(1, { motor: undefined, maxShaftPower: undefined }));
-    expect(unsized).toContain('Non-overloading motor per pump: - (not sized)');
+    expect(unsized).toContain('Non-overloading motor per pump: - (not sized: no operating point)');
     expect(unsized).toContain('Largest shaft power per pump: -');
   });
 
   it('ranks the candidates and says which pass', () => {
     expect(si).toMatch(/^ {3}1 {2}candidate A {2}passes +274,260 +32,911 EUR +0 +0$/m);
     expect(si).toMatch(/^ {3}2 {2}candidate B {2}fails +- +- +1 +1$/m);
-    expect(si).toContain('Result: FAILED (1 error, 2 warnings, 1 note)');
+    expect(si).toContain('Verdict: 1 of 2 candidates passes; recommended: candidate A.');
+    expect(si).toContain('Findings: 1 error, 2 warnings, 1 note');
   });
 
   it('lists every check with its source under its severity, then every caution', () => {
@@ -327,7 +350,7 @@ describe('text report', () => {
     expect(checks.length).toBe(4);
     for (const c of checks) {
       expect(text).toContain(`[${c.id}]`);
-      expect(text).toContain(folded(c.message));
+      expect(text).toContain(folded(checkMessage(c, 'si')));
       expect(text).toContain(`(source: ${c.source})`);
     }
     const errors = text.indexOf('Errors (1)');
@@ -388,7 +411,7 @@ describe('text report', () => {
       passed: true,
     };
     const text = renderText(dutyOnly);
-    expect(text).toContain('Result: passed (0 errors, 0 warnings, 0 notes)');
+    expect(text).toContain('Findings: 0 errors, 0 warnings, 0 notes');
     expect(text).toContain('No candidate pumps were given');
     expect(text).not.toContain('Ranking');
     expect(text).toContain('No operating case was evaluated.');
@@ -412,7 +435,7 @@ describe('text report', () => {
 });
 
 describe('Markdown report', () => {
-  const md = renderMarkdown(REPORT);
+  const md = renderMarkdown(REPORT, { summary: true });
 
   it('has the same sections and numbers as the text report', () => {
     expect(
@@ -434,17 +457,17 @@ describe('Markdown report', () => {
     expect(md).toContain(
       '| design, clean pipe | 1480 | 281.5 | 31.57 | 81.9 | 29.43 | 97.3 | preferred | 9.456 | 4.068 | 2.32 |',
     );
-    expect(md).toContain('| low level \\| aged pipe | - | - | - | - | - | - | - | - | - | - |');
-    expect(md).toContain('| Case | Speed (rpm) | Flow (m3/h) |');
-    expect(md).toContain('NPSHa/NPSHr |');
-    expect(md).toContain('- **Duty flow:** 270.0 m3/h');
+    expect(md).toContain('| low level \\| aged pipe | - | - | - | - | - |');
+    expect(md).toContain('| Case | Speed (rpm) | Flow (m³/h) |');
+    expect(md).toContain('NPSH ratio |');
+    expect(md).toContain('- **Duty flow:** 270.0 m³/h');
   });
 
   it('lists every check and caution', () => {
     const plain = unescaped(md);
     for (const c of [...REPORT.checks, ...REPORT.candidates.flatMap((k) => k.checks)]) {
       expect(plain).toContain(`[${c.id}]`);
-      expect(plain).toContain(c.message);
+      expect(plain).toContain(checkMessage(c, 'si', 'unicode'));
       expect(plain).toContain(`(source: ${c.source})`);
     }
     for (const c of REPORT.cautions) expect(plain).toContain(`- ${c}`);
@@ -461,7 +484,7 @@ describe('Markdown report', () => {
 
   it('every table row has as many cells as its header, and a rule row', () => {
     const tables = markdownTables(md);
-    expect(tables.length).toBe(5); // duty, end pressures, two candidates, ranking
+    expect(tables.length).toBe(5); // duty, candidate A, candidate B (set and pump), ranking
     for (const t of tables) {
       expect(new Set(t).size, JSON.stringify(t)).toBe(1);
     }
@@ -470,7 +493,7 @@ describe('Markdown report', () => {
   it('escapes | and line breaks in names, and Markdown markup in text', () => {
     const odd: DesignReport = {
       ...withCandidate(0, { name: 'A | B\nC' }),
-      fluid: 'brine *25 %* <mixed> & [cold]',
+      fluid: { ...REPORT.fluid, name: 'brine *25 %* <mixed> & [cold]' },
     };
     const out = renderMarkdown(odd);
     expect(out).toContain('## Candidate 1: A \\| B C (passes)');
@@ -547,10 +570,10 @@ describe('JSON report', () => {
 
   it('is a versioned, pretty, stable envelope', () => {
     expect(Object.keys(doc)).toEqual(['format', 'units', 'report']);
-    expect(doc.format).toBe('headflow-report/1');
+    expect(doc.format).toBe('headflow-report/2');
     expect(doc.units).toEqual({ ...displayUnits('si'), energy: 'kWh' });
     expect(usDoc.units).toEqual({ ...displayUnits('us'), energy: 'kWh' });
-    expect(text.startsWith('{\n  "format": "headflow-report/1",\n')).toBe(true);
+    expect(text.startsWith('{\n  "format": "headflow-report/2",\n')).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
     expect(renderJson(REPORT)).toBe(text);
     expect(renderJson({ ...REPORT })).toBe(text);
@@ -617,12 +640,12 @@ describe('JSON report', () => {
           });
         });
       });
-      REPORT.curves.points.forEach((p, i) => {
-        expectRelative(back(r.curves.points[i]?.flow), p.flow, TOL, 'point flow');
-        expectRelative(back(r.curves.points[i]?.head), p.head, TOL, 'point head');
+      CURVES.points.forEach((p, i) => {
+        expectRelative(back((r.curves as JsonCurves).points[i]?.flow), p.flow, TOL, 'point flow');
+        expectRelative(back((r.curves as JsonCurves).points[i]?.head), p.head, TOL, 'point head');
       });
-      REPORT.curves.pumps.forEach((c, i) => {
-        const jc = r.curves.pumps[i];
+      CURVES.pumps.forEach((c, i) => {
+        const jc = (r.curves as JsonCurves).pumps[i];
         const fu = toSI[jc?.flow.unit ?? ''] ?? Number.NaN;
         const hu = toSI[jc?.value.unit ?? ''] ?? Number.NaN;
         c.flows.forEach((f, k) => {
@@ -630,10 +653,10 @@ describe('JSON report', () => {
           expectRelative((jc?.value.values[k] ?? Number.NaN) * hu, c.values[k] ?? 0, TOL, 'head');
         });
       });
-      expect(r.curves.efficiency[0]?.value.unit).toBe('1');
+      expect((r.curves as JsonCurves).efficiency[0]?.value.unit).toBe('1');
       expectRelative(
-        back(r.curves.preferredRegions[0]?.maxFlow),
-        REPORT.curves.preferredRegions[0]?.maxFlow ?? 0,
+        back((r.curves as JsonCurves).preferredRegions[0]?.maxFlow),
+        CURVES.preferredRegions[0]?.maxFlow ?? 0,
         TOL,
         'region',
       );
@@ -658,13 +681,19 @@ describe('JSON report', () => {
       message: REPORT.checks[0]?.message,
       source: 'common practice',
       siValues: { velocity: 2.6, max: 2.4 },
+      words: {},
     });
     expect(b?.checks.map((c) => c.id)).toEqual(['no-operating-point', 'npsh-data']);
     expect(doc.report.cautions).toEqual(REPORT.cautions);
     const bare = reportToPlain(withCandidate(1, { motor: undefined }), 'si');
     expect(bare.report.candidates[1]?.motor).toBeNull();
-    const noCost = reportToPlain(withCandidate(0, { energy: { kWh: 1, cost: undefined } }), 'si');
+    const noCost = reportToPlain(
+      withCandidate(0, { energy: { kWh: 1, cost: undefined, control: 'throttle', hours: 8760 } }),
+      'si',
+    );
     expect(noCost.report.candidates[0]?.energy).toEqual({
+      control: 'throttle',
+      hours: 8760,
       yearly: { value: 1, unit: 'kWh' },
       cost: null,
     });
@@ -687,8 +716,9 @@ describe('JSON report', () => {
       }
     };
     walk(usDoc);
+    // kW only as the IEC nameplate of a motor, in brackets after its rating in hp.
     expect(new Set(seen)).toEqual(
-      new Set(['gal/min', 'ft', 'rpm', 'hp', 'kW', 'ft/s', 'psi', 'kWh']),
+      new Set(['gal/min', 'ft', 'rpm', 'hp', 'kW', 'ft/s', 'psi', 'kWh', 'degF', 'lb/ft3', 'cSt']),
     );
   });
 });
@@ -699,14 +729,14 @@ describe('chart from a report', () => {
     expect(spec.title).toBe(REPORT.name);
     expect(spec.units).toEqual({ flow: 'gal/min', head: 'ft' });
     expect(chartSpecFromReport(REPORT).units).toEqual({ flow: 'm3/h', head: 'm' });
-    expect(spec.pumpCurves.map((s) => s.name)).toEqual(REPORT.curves.pumps.map((c) => c.name));
+    expect(spec.pumpCurves.map((s) => s.name)).toEqual(CURVES.pumps.map((c) => c.name));
     expect(spec.systemCurves.map((s) => s.name)).toEqual([DESIGN_CASE, AGED_CASE]);
     expect(spec.efficiencyCurves.length).toBe(2);
     expect(spec.npshRequired.length).toBe(1);
     expect(spec.npshAvailable?.length).toBe(2);
-    expect(spec.operatingPoints).toEqual(REPORT.curves.points);
-    expect(spec.preferredRegions).toEqual(REPORT.curves.preferredRegions);
-    const first = REPORT.curves.systems[0];
+    expect(spec.operatingPoints).toEqual(CURVES.points);
+    expect(spec.preferredRegions).toEqual(CURVES.preferredRegions);
+    const first = CURVES.systems[0];
     expect(spec.systemCurves[0]?.points[3]).toEqual({
       flow: first?.flows[3],
       value: first?.values[3],
@@ -717,13 +747,13 @@ describe('chart from a report', () => {
     const svg = renderChart(chartSpecFromReport(REPORT));
     expect(XMLValidator.validate(svg)).toBe(true);
     expect(svg).not.toMatch(/NaN|undefined/);
-    for (const c of REPORT.curves.pumps) expect(svg).toContain(c.name);
+    for (const c of CURVES.pumps) expect(svg).toContain(c.name);
   });
 
   it('refuses a sampled curve with fewer values than flows', () => {
     const bad: DesignReport = {
       ...REPORT,
-      curves: { ...REPORT.curves, systems: [{ name: 'x', flows: [0, 1], values: [1] }] },
+      curves: { ...CURVES, systems: [{ name: 'x', flows: [0, 1], values: [1] }] },
     };
     const err = expectHeadflowError(() => chartSpecFromReport(bad), 'INVALID_ARGUMENT');
     expect(err.parameter).toBe('curves.systems[0].values');
@@ -738,12 +768,13 @@ describe('the guide (docs/reports.md)', () => {
       c.map((x) => (typeof x === 'string' ? x : JSON.stringify(x))).join(' '),
     );
     log.mockRestore();
-    // The first lines come from the cooling-loop example it imports; the guide prints the last five.
-    expect(lines.slice(-5)).toEqual([
+    // The first lines come from the cooling-loop example it imports; the guide prints the last six.
+    expect(lines.slice(-6)).toEqual([
       'Pump selection report: process cooling loop',
       '# Pump selection report: process cooling loop',
-      'headflow-report/1',
+      'headflow-report/2',
       '{"value":105,"unit":"m3/h"}',
+      'true',
       'true',
     ]);
   });
