@@ -10,7 +10,7 @@ export {
   type PipeRunInput,
   pipeRun,
   type ValveCoefficient,
-} from './run';
+} from '../network/index';
 export {
   applyCase,
   dutyFor,

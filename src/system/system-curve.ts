@@ -25,7 +25,7 @@ import {
   type RunLossBreakdown,
   runEvaluator,
   runLoss,
-} from './run';
+} from '../network/index';
 
 /**
  * One end of the system: a liquid surface or a point in the line.
