@@ -31,6 +31,13 @@ export { HAZEN_WILLIAMS_SI, hazenWilliamsHeadLoss } from './hazen-williams';
 export { laminar } from './laminar';
 export { reynolds, reynoldsFromFlow } from './reynolds';
 export { serghides } from './serghides';
+/** @internal */
+export {
+  type FrictionPolicy,
+  type FrictionSlope,
+  frictionPolicy,
+  frictionWithSlope,
+} from './slope';
 export { swameeJain } from './swamee-jain';
 export {
   LIMIT_RELATIVE_ROUGHNESS,

@@ -1,18 +1,26 @@
 /**
- * Networks: branched and looped piping. The pipe run lives here: it is the network's link,
- * and systems build their lines from it.
+ * Networks: branched and looped piping with junctions, fixed-level surfaces and
+ * pressure-dependent outlets, linked by pipe runs, pumps, check valves and control valves,
+ * solved by the global gradient method (Todini and Pilati 1988). The pipe run lives here too:
+ * it is the network's link, and systems build their lines from it.
  *
  * @module network
  */
 export {
+  checkRunRoughness,
+  LOW_FLOW_VELOCITY,
   type LossComponent,
+  type LossSlope,
   type PipeRun,
   type PipeRunInput,
   pipeRun,
   type RunContext,
   type RunEvaluator,
+  type RunFrictionLaw,
   type RunLossBreakdown,
+  runContext,
   runEvaluator,
   runLoss,
+  runLossSlope,
   type ValveCoefficient,
 } from './run';

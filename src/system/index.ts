@@ -9,6 +9,7 @@ export {
   type PipeRun,
   type PipeRunInput,
   pipeRun,
+  type RunFrictionLaw,
   type ValveCoefficient,
 } from '../network/index';
 export {

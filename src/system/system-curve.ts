@@ -7,6 +7,18 @@
 import { argumentError, checkFinite, checkPositive, HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
+import {
+  checkRunRoughness,
+  type PipeRun,
+  type PipeRunInput,
+  pipeRun,
+  type RunContext,
+  type RunEvaluator,
+  type RunLossBreakdown,
+  runContext,
+  runEvaluator,
+  runLoss,
+} from '../network/index';
 import { brent } from '../numeric/brent';
 import {
   type Acceleration,
@@ -16,16 +28,6 @@ import {
   STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
-import {
-  type PipeRun,
-  type PipeRunInput,
-  pipeRun,
-  type RunContext,
-  type RunEvaluator,
-  type RunLossBreakdown,
-  runEvaluator,
-  runLoss,
-} from '../network/index';
 
 /**
  * One end of the system: a liquid surface or a point in the line.
@@ -283,13 +285,19 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     throw argumentError('INVALID_ARGUMENT', 'runs', 0, 'runs', 'at least one run');
   }
   const aged = definition.aged === true;
-  const ctx: RunContext = {
-    density: fluid.density,
-    kinematicViscosity: fluid.kinematicViscosity,
+  const ctx: RunContext = runContext(
+    fluid.density,
+    fluid.kinematicViscosity,
     g,
-    friction: definition.friction,
-  };
+    definition.friction,
+  );
   const elements = buildLine(definition.runs, aged);
+  for (const el of elements) {
+    if (el.kind === 'run') checkRunRoughness(el.ev.run, definition.friction);
+    else
+      for (const b of el.group.branches)
+        for (const ev of b) checkRunRoughness(ev.run, definition.friction);
+  }
   const rhoG = fluid.density * g;
   const staticHead =
     discharge.elevation - suction.elevation + (discharge.pressure - suction.pressure) / rhoG;
