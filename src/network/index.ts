@@ -24,3 +24,31 @@ export {
   runLossSlope,
   type ValveCoefficient,
 } from './run';
+export {
+  applyNetworkCase,
+  MAX_STATE_CHANGES,
+  outletCoefficient,
+  type PreparedNetwork,
+  prepareNetwork,
+  solveNetwork,
+} from './solve';
+export type {
+  ControlValve,
+  HeadRiseCurve,
+  JunctionNode,
+  LinkSolution,
+  LinkState,
+  LinkStatus,
+  NetworkCase,
+  NetworkDefinition,
+  NetworkLink,
+  NetworkNode,
+  NetworkSolution,
+  NetworkSolveOptions,
+  NodeSolution,
+  OutletNode,
+  PumpLink,
+  RunLink,
+  SurfaceNode,
+  ValveLink,
+} from './types';
