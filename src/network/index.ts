@@ -6,6 +6,8 @@
  *
  * @module network
  */
+
+export { type ParallelGroup, parallelGroup, parallelSplit } from './parallel';
 export {
   checkRunRoughness,
   LOW_FLOW_VELOCITY,

@@ -9,8 +9,11 @@ import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
 import {
   checkRunRoughness,
+  type ParallelGroup,
   type PipeRun,
   type PipeRunInput,
+  parallelGroup,
+  parallelSplit,
   pipeRun,
   type RunContext,
   type RunEvaluator,
@@ -19,7 +22,6 @@ import {
   runEvaluator,
   runLoss,
 } from '../network/index';
-import { brent } from '../numeric/brent';
 import {
   type Acceleration,
   type Flow,
@@ -134,6 +136,8 @@ export interface SystemCurve {
 interface Group {
   readonly name: string;
   readonly branches: readonly (readonly RunEvaluator[])[];
+  /** The group as the network core splits it (with its warm start). */
+  readonly split: ParallelGroup;
 }
 
 type Element =
@@ -145,59 +149,6 @@ function regimeOf(re: number): RunDetails['regime'] {
   if (re <= 2300) return 'laminar';
   if (re < 4000) return 'transition';
   return 'turbulent';
-}
-
-function branchLoss(branch: readonly RunEvaluator[], flow: number, ctx: RunContext): number {
-  let h = 0;
-  for (const ev of branch) h += runLoss(ev, flow, ctx);
-  return h;
-}
-
-/** Flow through one branch whose loss equals `head` (m); `hint` is a flow that overshoots. */
-function branchFlowAt(
-  branch: readonly RunEvaluator[],
-  head: number,
-  hint: number,
-  ctx: RunContext,
-): number {
-  if (head <= 0) return 0;
-  let hi = hint > 0 ? hint : 1e-6;
-  let guard = 0;
-  while (branchLoss(branch, hi, ctx) < head) {
-    hi *= 2;
-    if (++guard > 200) {
-      throw new HeadflowError('NO_SOLUTION', `a parallel branch cannot take a head of ${head} m.`);
-    }
-  }
-  return brent((q) => branchLoss(branch, q, ctx) - head, 0, hi, { xTolerance: hi * 1e-15 }).root;
-}
-
-/**
- * Splits a total flow among parallel branches so that every branch has the same head loss;
- * returns that head loss (m) and writes branch flows into `flows`.
- */
-function splitFlow(group: Group, total: number, ctx: RunContext, flows: Float64Array): number {
-  if (total === 0) {
-    flows.fill(0);
-    return 0;
-  }
-  // The common loss cannot exceed the loss of any branch carrying the whole flow.
-  let hMax = Number.POSITIVE_INFINITY;
-  for (const b of group.branches) hMax = Math.min(hMax, branchLoss(b, total, ctx));
-  const result = brent(
-    (h) => {
-      let sum = 0;
-      for (const b of group.branches) sum += branchFlowAt(b, h, total, ctx);
-      return sum - total;
-    },
-    0,
-    hMax,
-    { xTolerance: hMax * 1e-14 },
-  );
-  group.branches.forEach((b, i) => {
-    flows[i] = branchFlowAt(b, result.root, total, ctx);
-  });
-  return result.root;
 }
 
 function endpointVelocity(e: Endpoint, flow: number): number {
@@ -249,7 +200,9 @@ function checkFluid(fluid: FluidState, suction: Endpoint): void {
  * (incompressible, isothermal liquid). Each run loses `f (L/D) V^2/(2g)` (Darcy-Weisbach, f
  * from `frictionFactor` with the definition's policy) plus `K V^2/(2g)` for its fittings and
  * valves plus its equipment's losses. Parallel groups split the flow so that every branch
- * has the same loss (solved by nested Brent root finding to 1e-14 of the head).
+ * has the same loss, solved by the network core's global gradient step (Todini and Pilati
+ * 1988) on the group's two nodes, to 1e-13 of the loss; each evaluation starts from the last
+ * split, so a curve evaluated along nearby flows needs two to five steps per group.
  *
  * With the default `'conservative'` transition rule the friction factor jumps up at Re 2300
  * (laminar to the larger turbulent value), so a loss is discontinuous there; a parallel branch
@@ -310,7 +263,10 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
   const lossAt = (flow: number): number => {
     let h = 0;
     for (const el of elements) {
-      h += el.kind === 'run' ? runLoss(el.ev, flow, ctx) : splitFlow(el.group, flow, ctx, scratch);
+      h +=
+        el.kind === 'run'
+          ? runLoss(el.ev, flow, ctx)
+          : parallelSplit(el.group.split, flow, ctx, scratch);
     }
     return h;
   };
@@ -367,7 +323,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
         loss += push(el.ev, flow, undefined);
       } else {
         const flows = new Float64Array(el.group.branches.length);
-        loss += splitFlow(el.group, flow, ctx, flows);
+        loss += parallelSplit(el.group.split, flow, ctx, flows);
         el.group.branches.forEach((branch, j) => {
           for (const ev of branch) push(ev, flows[j] ?? 0, `${el.group.name} / branch ${j + 1}`);
         });
@@ -446,7 +402,10 @@ function buildLine(runs: readonly LineElement[], aged: boolean): Element[] {
         }
         return b.map((r) => runEvaluator(pipeRun(r, ++position, aged)));
       });
-      return { kind: 'parallel', group: { name: groupName, branches } };
+      return {
+        kind: 'parallel',
+        group: { name: groupName, branches, split: parallelGroup(branches) },
+      };
     }
     return { kind: 'run', ev: runEvaluator(pipeRun(el as PipeRunInput, ++position, aged)) };
   });
