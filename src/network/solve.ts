@@ -66,7 +66,18 @@ const OPEN = 0;
 const CLOSED = 1;
 const SHUT = 2;
 const ACTIVE = 3;
-const STATE_NAMES: readonly LinkState[] = ['open', 'closed', 'shut', 'active'];
+const PINNED = 4;
+const STATE_NAMES: readonly LinkState[] = ['open', 'closed', 'shut', 'active', 'pinned'];
+
+/** Reynolds number of the friction jump of the `'conservative'` transition rule. */
+const JUMP_RE = 2300;
+/**
+ * Half-width, relative to the flow, of the steep ramp that stands for the friction jump while
+ * a run is pinned on it (its flow is then Re 2300's to this fraction).
+ */
+const RAMP = 1e-9;
+/** Times a run may be pinned on the friction jump in one solve. */
+const MAX_PINS = 8;
 
 /** Most state changes one link may make in a solve; then its state is held. */
 export const MAX_STATE_CHANGES = 8;
@@ -858,6 +869,11 @@ function solveModel(
   const slope = new Float64Array(total);
   const state = new Int8Array(total);
   const changes = new Int32Array(total);
+  const pins = new Int32Array(total);
+  const pinLow = new Float64Array(total);
+  const pinHigh = new Float64Array(total);
+  const pinFlow = new Float64Array(total);
+  const jumps = !model.ctx.policy.interpolate;
   const fixedNow = new Uint8Array(nodes);
   const reached = new Uint8Array(nodes);
   const inMatrix = new Uint8Array(total);
@@ -923,6 +939,8 @@ function solveModel(
   let headResidual = Number.POSITIVE_INFINITY;
   let flowResidual = Number.POSITIVE_INFINITY;
   let changed = true;
+  // Whether the last step revised the link states (the flows had settled).
+  let revised = false;
   let worstLink = -1;
   let worstNode = -1;
   for (let iter = 0; ; iter++) {
@@ -940,7 +958,7 @@ function solveModel(
       }
     }
     for (let k = 0; k < total; k++) {
-      inMatrix[k] = state[k] === OPEN ? 1 : 0;
+      inMatrix[k] = state[k] === OPEN || state[k] === PINNED ? 1 : 0;
     }
     // Reachability from held heads through matrix links.
     reached.fill(0);
@@ -975,7 +993,13 @@ function solveModel(
       if (inMatrix[k] === 0) continue;
       const kd = kind[k];
       let h: number;
-      if (kd === RUN) {
+      if (state[k] === PINNED) {
+        // The jump as a steep ramp of relative width 2 RAMP about the Re 2300 flow.
+        const q0 = pinFlow[k] as number;
+        const ramp = ((pinHigh[k] as number) - (pinLow[k] as number)) / (2 * RAMP * Math.abs(q0));
+        h = 0.5 * ((pinLow[k] as number) + (pinHigh[k] as number)) + ramp * ((Q[k] as number) - q0);
+        res.slope = ramp;
+      } else if (kd === RUN) {
         h = runLossSlope(model.runs[k] as RunEvaluator, Q[k] as number, model.ctx, res);
       } else if (kd === PUMP) {
         const p = model.pumps[k] as PumpModel;
@@ -1046,7 +1070,7 @@ function solveModel(
         }
       }
       flowResidual = maxQ > 0 ? worst / maxQ : worst;
-      if (!changed && headResidual <= o.headTolerance && flowOk) break;
+      if (revised && !changed && headResidual <= o.headTolerance && flowOk) break;
     }
     if (iterations >= o.maxIterations) {
       throw noConvergence(
@@ -1124,14 +1148,39 @@ function solveModel(
     // 5. New flows.
     let change = 0;
     let largest = 0;
+    let pinned = false;
     for (let k = 0; k < total; k++) {
       if (inMatrix[k] === 1) {
         const w = 1 / (slope[k] as number);
         const old = Q[k] as number;
-        const qk =
+        let qk =
           old -
           (loss[k] as number) * w +
           w * ((H[from[k] as number] as number) - (H[to[k] as number] as number));
+        if (state[k] === PINNED) {
+          // Off the ramp: the head across the run left the jump; its law applies again.
+          const q0 = pinFlow[k] as number;
+          if (Math.abs(qk - q0) > RAMP * Math.abs(q0)) {
+            state[k] = OPEN;
+            pinned = true;
+          }
+        } else if (jumps && kind[k] === RUN && iterations >= 2 && (pins[k] as number) < MAX_PINS) {
+          // A step across the friction jump of the 'conservative' rule: hold the run there.
+          const ev = model.runs[k] as RunEvaluator;
+          const jump = jumpFlow(ev, model.ctx);
+          if (jump > 0 && old * qk > 0 && (Math.abs(old) - jump) * (Math.abs(qk) - jump) < 0) {
+            const signed = qk > 0 ? jump : -jump;
+            const a = runLossSlope(ev, signed * (1 - 1e-12), model.ctx, res);
+            const b = runLossSlope(ev, signed * (1 + 1e-12), model.ctx, res);
+            pinLow[k] = Math.min(a, b);
+            pinHigh[k] = Math.max(a, b);
+            pinFlow[k] = signed;
+            pins[k] = (pins[k] as number) + 1;
+            state[k] = PINNED;
+            qk = signed;
+            pinned = true;
+          }
+        }
         Q[k] = qk;
         change = Math.max(change, Math.abs(qk - old));
         largest = Math.max(largest, Math.abs(qk));
@@ -1159,9 +1208,10 @@ function solveModel(
     // 6. State changes by the stated rules, once the flows have settled (no flow moved by more
     // than SETTLED of the largest flow in this step): far from the solution a linearization
     // can show reverse flows or heads that the solution does not have.
-    changed = false;
+    changed = pinned;
     const tol = o.headTolerance;
     const settled = change <= SETTLED * largest;
+    revised = settled;
     for (let k = 0; k < total; k++) {
       if (!settled) break;
       const s = state[k] as number;
@@ -1171,6 +1221,7 @@ function solveModel(
       const hf = H[from[k] as number] as number;
       const ht = H[to[k] as number] as number;
       let next = s;
+      if (s === PINNED) continue;
       if ((kd === RUN && model.checkValve[k] === 1) || kd === EMITTER) {
         if (s === OPEN && qk < 0) next = SHUT;
         else if (s === SHUT && hf - ht > tol) next = OPEN;
@@ -1194,6 +1245,13 @@ function solveModel(
     }
   }
   return result(topo, model, Q, H, state, iterations, headResidual, flowResidual, reached);
+}
+
+/** Flow (m3/s) at which a Darcy-Weisbach run reaches Re 2300, or 0 for other laws. */
+function jumpFlow(ev: RunEvaluator, ctx: RunContext): number {
+  const run = ev.run;
+  if (run.law !== 'darcy-weisbach' || run.length === 0) return 0;
+  return (JUMP_RE * ctx.kinematicViscosity * run.area) / run.insideDiameter;
 }
 
 function valveState(

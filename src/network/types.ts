@@ -193,7 +193,12 @@ export type LinkState =
   /** A check valve or control valve closed against reverse flow, or a pump shut off. */
   | 'shut'
   /** A control valve throttling to hold its setting. */
-  | 'active';
+  | 'active'
+  /**
+   * A run held at Re 2300 on the friction jump of the `'conservative'` transition rule: the
+   * head across it lies inside the jump, which no flow balances (see `solveNetwork`).
+   */
+  | 'pinned';
 
 /** A node at the solution. */
 export interface NodeSolution {
