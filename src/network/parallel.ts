@@ -147,15 +147,24 @@ export function parallelSplit(
       free++;
     }
     if (free === 0) {
-      // Every branch on its jump: the common loss is any value in all intervals.
+      // Every branch on its jump: only right if the jump flows make up the total (then the
+      // common loss is any value in all intervals); otherwise free them all and go on.
+      let sum = 0;
       let a = Number.NEGATIVE_INFINITY;
       let b = Number.POSITIVE_INFINITY;
       for (let i = 0; i < n; i++) {
+        sum += g.pin[i] as number;
         a = Math.max(a, g.pinLow[i] as number);
         b = Math.min(b, g.pinHigh[i] as number);
       }
-      common = 0.5 * (a + b);
-      break;
+      if (Math.abs(sum - total) <= 1e-12 * total || steps >= MAX_STEPS) {
+        common = 0.5 * (a + b);
+        break;
+      }
+      g.pin.fill(Number.NaN);
+      moved = true;
+      steps++;
+      continue;
     }
     mean /= free;
     const tol = SPREAD * Math.abs(mean) + 1e-15;

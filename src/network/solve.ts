@@ -788,33 +788,42 @@ export function prepareNetwork(definition: NetworkDefinition): PreparedNetwork {
  *
  * Laws. Runs use their own law (Darcy-Weisbach with the friction policy, a stated factor, or
  * Hazen-Williams) with exact derivatives. The transition rule defaults to `'interpolate'` in
- * a network: the loss is then continuous in flow, which Newton's method needs (with the
- * `'conservative'` jump at Re 2300 a link can sit on the jump with no flow that balances
- * it, and the iteration cycles). Asking for `'conservative'` is allowed: a link whose
- * balance falls inside the jump then fails the convergence test and the solve reports it.
- * Laws with no slope at zero flow (a square law, Hazen-Williams, outlets) follow a
- * monotone cubic through zero below a small flow (1 mm/s in a run or valve, 1 mm of head at
- * an outlet), so that every slope stays finite and positive.
+ * a network: the loss is then continuous in flow, which Newton's method needs; with the
+ * `'conservative'` jump at Re 2300 a run may need a loss inside the jump, which no flow gives,
+ * and the plain iteration cycles around it. With `'conservative'` asked for, a run whose step
+ * crosses its jump flow is pinned there (state `'pinned'`: the jump stands in the head
+ * equations as a ramp of relative width 2e-9 about the Re 2300 flow) and released when the
+ * iteration carries it off the ramp, at most 8 pins per run. Laws with no slope at zero flow
+ * (a square law, Hazen-Williams, outlets) follow a monotone cubic through zero below a small
+ * flow (1 mm/s in a run or valve, 1 mm of head at an outlet), so that every slope stays
+ * finite and positive.
  *
  * Pumps add `count^series s^2 H(Q / (s count^parallel))` (affinity laws with the speed ratio
  * s); outside the curve's flow range during the iteration the curve is extended along its end
  * slope, and a solution outside the range is refused. Outlets discharge `k p^n` to the
  * atmosphere.
  *
- * States (the stated rule; each link may change state at most {@link MAX_STATE_CHANGES}
- * times in a solve, after which its state is held, so the iteration cannot cycle forever):
+ * States (the stated rule). Link states are revised after a step whose largest flow change is
+ * at most 1 % of the largest flow (far from the solution a linearization shows reverse flows
+ * and heads the solution does not have), and the solve ends only after a revision that
+ * changes nothing. Each link may change state at most {@link MAX_STATE_CHANGES} times in a
+ * solve, after which its state is held, so the iteration cannot cycle forever:
  * - check valve, pump, outlet: shut when their flow turns negative; reopen when the head
  *   difference would drive forward flow (for a pump: when its head at zero flow exceeds the
  *   rise the network asks);
- * - pressure-reducing valve: active (its outlet head held at the setting, its flow the flow
- *   its outlet side draws, taken into its inlet's balance at the next iteration) while the
- *   inlet head exceeds the setting plus the wide-open loss; open when it does not; shut on
- *   reverse flow or when the outlet head stays above the setting;
+ * - pressure-reducing valve: active (its outlet head held at the setting; its flow the flow
+ *   its outlet side draws, taken into its inlet's balance at the next step) while the inlet
+ *   head exceeds the setting plus the wide-open loss; open when it does not; shut on reverse
+ *   flow, or while the outlet head stays above the setting;
  * - pressure-sustaining valve: the mirror image on its inlet;
  * - flow-limiting valve: active (flow held at the setting) when the open valve would pass
  *   more; open again when the head across it is less than the wide-open loss at the setting.
- * The solve stops when every balance meets its tolerance with no state change at the last
- * step.
+ *
+ * Convergence and its limit. Flows come from head differences, so a link whose loss is tiny
+ * against the heads (a metre of large pipe at a trickle) has its flow fixed only to the
+ * heads' rounding: a node's flow balance is accepted at 1e-12 of the largest flow or at 32
+ * ulps of the terms its head equation sums, whichever is larger. Heads inside the solve are
+ * measured from the first surface's head to keep that rounding small.
  *
  * Sources: E. Todini and S. Pilati, 1988, "A gradient algorithm for the analysis of pipe
  * networks", in B. Coulbeck and C. H. Orr (eds.), "Computer Applications in Water Supply",
