@@ -91,6 +91,10 @@ export interface RunDetails {
   readonly reynolds: number;
   readonly regime: 'none' | 'laminar' | 'transition' | 'turbulent';
   readonly frictionFactor: number;
+  /** The run's friction law: the friction policy, a stated factor, or Hazen-Williams. */
+  readonly law: PipeRun['law'];
+  /** The stated friction factor or Hazen-Williams C (undefined for the policy). */
+  readonly lawValue: number | undefined;
   /** Straight-pipe loss (m). */
   readonly pipeLoss: Length;
   /** Fittings and valves loss (m). */
@@ -308,6 +312,8 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
         reynolds: b.reynolds,
         regime: regimeOf(b.reynolds),
         frictionFactor: b.frictionFactor,
+        law: ev.run.law,
+        lawValue: ev.run.lawValue,
         pipeLoss: b.pipeLoss as Length,
         fittingsLoss: b.fittingsLoss as Length,
         componentLoss: b.componentLoss as Length,

@@ -149,5 +149,8 @@ describe('run friction laws', () => {
     expectRelative(curve.head(0.005 as Flow), 10 + r.loss(0.005), 1e-15);
     const d = curve.details(0.005 as Flow).runs[0];
     expectRelative(d?.totalLoss ?? 0, r.loss(0.005), 1e-15);
+    // The details (and the JSON report built from them) name the law.
+    expect(d?.law).toBe('hazen-williams');
+    expect(d?.lawValue).toBe(130);
   });
 });
