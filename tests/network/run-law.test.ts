@@ -16,7 +16,7 @@ import {
 } from '../../src/network';
 import { systemCurve } from '../../src/system';
 import { type Flow, q, STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from '../../src/units';
-import { expectHeadflowError, expectRelative } from '../helpers/expect';
+import { expectAbsolute, expectHeadflowError, expectRelative } from '../helpers/expect';
 
 const cold: FluidState = water().at(q(20, 'degC'));
 const G = STANDARD_GRAVITY;
@@ -152,5 +152,32 @@ describe('run friction laws', () => {
     // The details (and the JSON report built from them) name the law.
     expect(d?.law).toBe('hazen-williams');
     expect(d?.lawValue).toBe(130);
+  });
+});
+
+describe('friction factor with its slope in Re', () => {
+  it('equals frictionFactor, with a slope equal to the central difference, in every regime', async () => {
+    const { frictionPolicy, frictionWithSlope } = await import('../../src/friction/slope');
+    const { frictionFactor } = await import('../../src/friction');
+    const out = { f: 0, dfdRe: 0 };
+    for (const options of [
+      undefined,
+      { transition: 'interpolate' as const },
+      { method: 'chen' as const, transition: 'conservative' as const },
+    ]) {
+      const p = frictionPolicy(options);
+      for (const re of [500, 2000, 2500, 3000, 3900, 5000, 1e5, 1e7]) {
+        for (const rr of [0, 1e-4, 0.01]) {
+          frictionWithSlope(p, re, rr, out);
+          expectRelative(out.f, frictionFactor(re, rr, options), 1e-15, `Re ${re}`);
+          const h = re * 1e-7;
+          const fd =
+            (frictionFactor(re + h, rr, options) - frictionFactor(re - h, rr, options)) / (2 * h);
+          // Central difference: truncation ~1e-14, rounding ~1e-16 / 1e-7 of f/Re (the
+          // slope's natural scale; in fully rough flow the slope itself nearly vanishes).
+          expectAbsolute(out.dfdRe, fd, (1e-6 * out.f) / re, `Re ${re} eps/D ${rr}`);
+        }
+      }
+    }
   });
 });
