@@ -32,12 +32,6 @@ export { laminar } from './laminar';
 export { reynolds, reynoldsFromFlow } from './reynolds';
 export { serghides } from './serghides';
 /** @internal */
-export {
-  type FrictionPolicy,
-  type FrictionSlope,
-  frictionPolicy,
-  frictionWithSlope,
-} from './slope';
 export { swameeJain } from './swamee-jain';
 export {
   LIMIT_RELATIVE_ROUGHNESS,

@@ -5,15 +5,13 @@
  * @module
  */
 import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
+import { type FrictionFactorOptions, frictionFactor, HAZEN_WILLIAMS_SI } from '../friction/index';
 import {
-  type FrictionFactorOptions,
   type FrictionPolicy,
   type FrictionSlope,
-  frictionFactor,
   frictionPolicy,
   frictionWithSlope,
-  HAZEN_WILLIAMS_SI,
-} from '../friction/index';
+} from '../friction/internal';
 import { type FittingCount, type FittingSet, fittingSet, kFromCv, kFromKv } from '../losses/index';
 import { type MaterialName, material, type PipeDimensions } from '../pipes/index';
 import type { Acceleration, Density, Flow, Length } from '../units/index';

@@ -7,21 +7,19 @@
 import { argumentError, checkFinite, checkPositive, HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
+import { type PipeRun, type PipeRunInput, pipeRun } from '../network/index';
 import {
   checkRunRoughness,
   type ParallelGroup,
-  type PipeRun,
-  type PipeRunInput,
   parallelGroup,
   parallelSplit,
-  pipeRun,
   type RunContext,
   type RunEvaluator,
   type RunLossBreakdown,
   runContext,
   runEvaluator,
   runLoss,
-} from '../network/index';
+} from '../network/internal';
 import {
   type Acceleration,
   type Flow,

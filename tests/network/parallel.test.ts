@@ -6,17 +6,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { water } from '../../src/fluids';
+import { type NetworkLink, type NetworkNode, pipeRun, solveNetwork } from '../../src/network';
 import {
-  type NetworkLink,
-  type NetworkNode,
   parallelGroup,
   parallelSplit,
-  pipeRun,
   runContext,
   runEvaluator,
   runLoss,
-  solveNetwork,
-} from '../../src/network';
+} from '../../src/network/internal';
 import { type PipeRunInput, systemCurve } from '../../src/system';
 import { type Flow, q, STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from '../../src/units';
 import { expectAbsolute, expectRelative } from '../helpers/expect';

@@ -5,15 +5,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { type FluidState, water } from '../../src/fluids';
-import {
-  LOW_FLOW_VELOCITY,
-  type LossSlope,
-  type PipeRunInput,
-  pipeRun,
-  runContext,
-  runEvaluator,
-  runLossSlope,
-} from '../../src/network';
+import { LOW_FLOW_VELOCITY, type PipeRunInput, pipeRun } from '../../src/network';
+import { type LossSlope, runContext, runEvaluator, runLossSlope } from '../../src/network/internal';
 import { systemCurve } from '../../src/system';
 import { type Flow, q, STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from '../../src/units';
 import { expectAbsolute, expectHeadflowError, expectRelative } from '../helpers/expect';
