@@ -266,3 +266,52 @@ describe('solveNetwork: friction methods and dense layouts', () => {
     expect(chol.entry(0, 0)).toBe(chol.diagonal(0));
   });
 });
+
+describe('solveNetwork: any input is refused with a HeadflowError, never a TypeError', () => {
+  it('random shapes for the definition, its nodes and links, and the options', async () => {
+    const fc = (await import('fast-check')).default;
+    const { HeadflowError } = await import('../../src/errors');
+    const base: NetworkDefinition = {
+      fluid,
+      nodes: [
+        { id: 't', elevation: q(10, 'm'), surface: {} },
+        { id: 'j', elevation: q(0, 'm'), demand: q(1, 'L/s') },
+      ],
+      links: [{ id: 'l', from: 't', to: 'j', run: pipe(10, 50) }],
+    };
+    const bad = fc.oneof(fc.anything(), fc.constantFrom(null, undefined, Number.NaN, -1, '', []));
+    fc.assert(
+      fc.property(
+        bad,
+        bad,
+        bad,
+        fc.constantFrom('definition', 'node', 'link', 'run', 'options', 'case'),
+        (x, y, z, where) => {
+          try {
+            if (where === 'definition') solveNetwork(x as never);
+            else if (where === 'node')
+              solveNetwork({ ...base, nodes: [base.nodes[0] as NetworkNode, x as never] });
+            else if (where === 'link') solveNetwork({ ...base, links: [x as never] });
+            else if (where === 'run')
+              solveNetwork({
+                ...base,
+                links: [
+                  {
+                    id: 'l',
+                    from: 't',
+                    to: 'j',
+                    run: { length: x, insideDiameter: y, roughness: z } as never,
+                  },
+                ],
+              });
+            else if (where === 'options') solveNetwork(base, x as never);
+            else prepareNetwork(base).solve(x as never);
+          } catch (e) {
+            expect(e).toBeInstanceOf(HeadflowError);
+          }
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+});
