@@ -174,25 +174,32 @@ export function sparseCholesky(graph: AdjacencyGraph): SparseCholesky {
   };
 
   const factor = (): number => {
+    // Locals, so that the compiler keeps them in registers in the inner loop.
+    const lxs = lx;
+    const lis = li;
+    const xs = x;
+    const fill = fillPos;
+    const rows = rowList;
     for (let k = 0; k < n; k++) {
       // Scatter column k of C (upper part) into x.
       const end = (cp[k + 1] as number) - 1;
-      for (let p = cp[k] as number; p < end; p++) x[ci[p] as number] = values[p] as number;
+      for (let p = cp[k] as number; p < end; p++) xs[ci[p] as number] = values[p] as number;
       let d = values[end] as number;
-      for (let t = rowPtr[k] as number; t < (rowPtr[k + 1] as number); t++) {
-        const i = rowList[t] as number;
+      const tEnd = rowPtr[k + 1] as number;
+      for (let t = rowPtr[k] as number; t < tEnd; t++) {
+        const i = rows[t] as number;
         const start = lp[i] as number;
-        const lki = (x[i] as number) / (lx[start] as number);
-        x[i] = 0;
-        const stop = fillPos[i] as number;
+        const lki = (xs[i] as number) / (lxs[start] as number);
+        xs[i] = 0;
+        const stop = fill[i] as number;
         for (let p = start + 1; p < stop; p++) {
-          const r = li[p] as number;
-          x[r] = (x[r] as number) - (lx[p] as number) * lki;
+          const r = lis[p] as number;
+          xs[r] = (xs[r] as number) - (lxs[p] as number) * lki;
         }
         d -= lki * lki;
-        li[stop] = k;
-        lx[stop] = lki;
-        fillPos[i] = stop + 1;
+        lis[stop] = k;
+        lxs[stop] = lki;
+        fill[i] = stop + 1;
       }
       if (!(d > 0)) {
         // Reset the fill positions for a later call, then report the pivot.
@@ -212,27 +219,32 @@ export function sparseCholesky(graph: AdjacencyGraph): SparseCholesky {
   for (let j = 0; j < n; j++) fillPos[j] = lp[j] as number;
 
   const solve = (b: Float64Array): void => {
-    for (let k = 0; k < n; k++) y[k] = b[order[k] as number] as number;
+    const lxs = lx;
+    const lis = li;
+    const lps = lp;
+    const ys = y;
+    const ord = order;
+    for (let k = 0; k < n; k++) ys[k] = b[ord[k] as number] as number;
     // L y' = y (columns of L: diagonal first, then rows below).
     for (let j = 0; j < n; j++) {
-      const p0 = lp[j] as number;
-      const yj = (y[j] as number) / (lx[p0] as number);
-      y[j] = yj;
-      for (let p = p0 + 1; p < (lp[j + 1] as number); p++) {
-        const r = li[p] as number;
-        y[r] = (y[r] as number) - (lx[p] as number) * yj;
+      const p0 = lps[j] as number;
+      const yj = (ys[j] as number) / (lxs[p0] as number);
+      ys[j] = yj;
+      for (let p = p0 + 1; p < (lps[j + 1] as number); p++) {
+        const r = lis[p] as number;
+        ys[r] = (ys[r] as number) - (lxs[p] as number) * yj;
       }
     }
     // L^T x = y'.
     for (let j = n - 1; j >= 0; j--) {
-      const p0 = lp[j] as number;
-      let s = y[j] as number;
-      for (let p = p0 + 1; p < (lp[j + 1] as number); p++) {
-        s -= (lx[p] as number) * (y[li[p] as number] as number);
+      const p0 = lps[j] as number;
+      let s = ys[j] as number;
+      for (let p = p0 + 1; p < (lps[j + 1] as number); p++) {
+        s -= (lxs[p] as number) * (ys[lis[p] as number] as number);
       }
-      y[j] = s / (lx[p0] as number);
+      ys[j] = s / (lxs[p0] as number);
     }
-    for (let k = 0; k < n; k++) b[order[k] as number] = y[k] as number;
+    for (let k = 0; k < n; k++) b[ord[k] as number] = ys[k] as number;
   };
 
   if (nnzL > 2 ** 30) {
