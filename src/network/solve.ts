@@ -790,10 +790,13 @@ export function prepareNetwork(definition: NetworkDefinition): PreparedNetwork {
  * Hazen-Williams) with exact derivatives. The transition rule defaults to `'interpolate'` in
  * a network: the loss is then continuous in flow, which Newton's method needs; with the
  * `'conservative'` jump at Re 2300 a run may need a loss inside the jump, which no flow gives,
- * and the plain iteration cycles around it. With `'conservative'` asked for, a run whose step
- * crosses its jump flow is pinned there (state `'pinned'`: the jump stands in the head
- * equations as a ramp of relative width 2e-9 about the Re 2300 flow) and released when the
- * iteration carries it off the ramp, at most 8 pins per run. Laws with no slope at zero flow
+ * and the plain iteration cycles around it. With `'conservative'` asked for: a run whose step
+ * first crosses its jump flow stops just past it (the next step linearizes the law on that
+ * side); a run that then crosses back is pinned at the jump (state `'pinned'`: the jump
+ * stands in the head equations as a ramp of relative width 2e-9 about the Re 2300 flow) and
+ * released, on the side the heads ask for, when the iteration carries it off the ramp; at
+ * most 8 pins per run, and never the last run at a node that follows its law. A network with
+ * hundreds of runs sitting at the jump may still cycle; the solve then says so. Laws with no slope at zero flow
  * (a square law, Hazen-Williams, outlets) follow a monotone cubic through zero below a small
  * flow (1 mm/s in a run or valve, 1 mm of head at an outlet), so that every slope stays
  * finite and positive.
@@ -882,6 +885,8 @@ function solveModel(
   const pinLow = new Float64Array(total);
   const pinHigh = new Float64Array(total);
   const pinFlow = new Float64Array(total);
+  const free = new Int32Array(nodes);
+  const lastCross = new Int8Array(total);
   const jumps = !model.ctx.policy.interpolate;
   const fixedNow = new Uint8Array(nodes);
   const reached = new Uint8Array(nodes);
@@ -1158,6 +1163,17 @@ function solveModel(
     let change = 0;
     let largest = 0;
     let pinned = false;
+    if (jumps) {
+      // Links at each node that follow their law (a node must keep one, or its head would
+      // rest on pinned flows alone).
+      free.fill(0);
+      for (let k = 0; k < total; k++) {
+        if (inMatrix[k] === 1 && state[k] === OPEN) {
+          free[from[k] as number] = (free[from[k] as number] as number) + 1;
+          free[to[k] as number] = (free[to[k] as number] as number) + 1;
+        }
+      }
+    }
     for (let k = 0; k < total; k++) {
       if (inMatrix[k] === 1) {
         const w = 1 / (slope[k] as number);
@@ -1172,12 +1188,32 @@ function solveModel(
           if (Math.abs(qk - q0) > RAMP * Math.abs(q0)) {
             state[k] = OPEN;
             pinned = true;
+            // Released on the side the head asks for; crossing back pins it again.
+            lastCross[k] = Math.abs(qk) > Math.abs(q0) ? 1 : -1;
           }
         } else if (jumps && kind[k] === RUN && iterations >= 2 && (pins[k] as number) < MAX_PINS) {
           // A step across the friction jump of the 'conservative' rule: hold the run there.
           const ev = model.runs[k] as RunEvaluator;
           const jump = jumpFlow(ev, model.ctx);
-          if (jump > 0 && old * qk > 0 && (Math.abs(old) - jump) * (Math.abs(qk) - jump) < 0) {
+          const a0 = from[k] as number;
+          const b0 = to[k] as number;
+          const keeps =
+            (fixedNow[a0] === 1 || (free[a0] as number) > 1) &&
+            (fixedNow[b0] === 1 || (free[b0] as number) > 1);
+          const crossing =
+            jump > 0 && old * qk > 0 && (Math.abs(old) - jump) * (Math.abs(qk) - jump) < 0;
+          const up = Math.abs(qk) > jump ? 1 : -1;
+          if (crossing && lastCross[k] !== -up) {
+            // A first crossing: stop the step just past the jump, so that the next step
+            // linearizes the law on the side it moved to.
+            lastCross[k] = up;
+            qk = (qk > 0 ? jump : -jump) * (1 + up * 1e-9);
+            pinned = true;
+          } else if (crossing && keeps) {
+            // Back across the jump it crossed before: the balance lies inside the jump.
+            lastCross[k] = 0;
+            free[a0] = (free[a0] as number) - 1;
+            free[b0] = (free[b0] as number) - 1;
             const signed = qk > 0 ? jump : -jump;
             const a = runLossSlope(ev, signed * (1 - 1e-12), model.ctx, res);
             const b = runLossSlope(ev, signed * (1 + 1e-12), model.ctx, res);
