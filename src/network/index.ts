@@ -8,6 +8,8 @@
  * @module network
  */
 
+export { applyNetworkCase } from './cases';
+export { outletCoefficient } from './outlet';
 export {
   LOW_FLOW_VELOCITY,
   type LossComponent,
@@ -18,9 +20,7 @@ export {
   type ValveCoefficient,
 } from './run';
 export {
-  applyNetworkCase,
   MAX_STATE_CHANGES,
-  outletCoefficient,
   type PreparedNetwork,
   prepareNetwork,
   solveNetwork,
