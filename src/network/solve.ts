@@ -188,8 +188,9 @@ export function prepareNetwork(definition: NetworkDefinition): PreparedNetwork {
  * Convergence and its limit. Flows come from head differences, so a link whose loss is tiny
  * against the heads (a metre of large pipe at a trickle) has its flow fixed only to the
  * heads' rounding: a node's flow balance is accepted at 1e-12 of the largest flow or at 32
- * ulps of the terms its head equation sums, whichever is larger. Heads inside the solve are
- * measured from the first surface's head to keep that rounding small.
+ * ulps of the terms its head equation sums, whichever is larger; likewise a link's head
+ * balance at the head tolerance or at 32 ulps of its loss and end heads. Heads inside the
+ * solve are measured from the first surface's head to keep that rounding small.
  *
  * Sources: E. Todini and S. Pilati, 1988, "A gradient algorithm for the analysis of pipe
  * networks", in B. Coulbeck and C. H. Orr (eds.), "Computer Applications in Water Supply",
@@ -253,6 +254,7 @@ function solveModel(
   const jumps = !model.ctx.policy.interpolate;
   const fixedNow = new Uint8Array(nodes);
   const reached = new Uint8Array(nodes);
+  const isVar = new Uint8Array(nodes);
   const inMatrix = new Uint8Array(total);
   const net = new Float64Array(nodes);
   const floor = new Float64Array(nodes);
@@ -318,6 +320,7 @@ function solveModel(
   let changed = true;
   // Whether the last step revised the link states (the flows had settled).
   let revised = false;
+  let headOk = false;
   let worstLink = -1;
   let worstNode = -1;
   for (let iter = 0; ; iter++) {
@@ -413,11 +416,18 @@ function solveModel(
     if (iter > 0) {
       headResidual = 0;
       worstLink = -1;
+      headOk = true;
       for (let k = 0; k < total; k++) {
         if (inMatrix[k] === 0) continue;
-        const r = Math.abs(
-          (loss[k] as number) - ((H[from[k] as number] as number) - (H[to[k] as number] as number)),
-        );
+        const hf = H[from[k] as number] as number;
+        const ht = H[to[k] as number] as number;
+        const lk = loss[k] as number;
+        const r = Math.abs(lk - (hf - ht));
+        // The tolerance, or the rounding of the numbers the balance subtracts (a loss of
+        // 1e5 m cannot balance to 1e-10 m), whichever is larger.
+        if (r > o.headTolerance + ROUNDING * (Math.abs(lk) + Math.abs(hf) + Math.abs(ht))) {
+          headOk = false;
+        }
         if (r > headResidual) {
           headResidual = r;
           worstLink = k;
@@ -447,7 +457,7 @@ function solveModel(
         }
       }
       flowResidual = maxQ > 0 ? worst / maxQ : worst;
-      if (revised && !changed && headResidual <= o.headTolerance && flowOk) break;
+      if (revised && !changed && headOk && flowOk) break;
     }
     if (iterations >= o.maxIterations) {
       throw noConvergence(
@@ -464,17 +474,18 @@ function solveModel(
     // 4. Assemble A H = F and solve.
     values.fill(0);
     rhs.fill(0);
+    // A node whose head this step solves for: a row, not held, joined to a held head.
     for (let i = 0; i < nodes; i++) {
       const r = row[i] as number;
-      if (r >= 0 && fixedNow[i] === 0 && reached[i] === 1) rhs[r] = -(model.demand[i] as number);
+      const v = r >= 0 && fixedNow[i] === 0 && reached[i] === 1;
+      isVar[i] = v ? 1 : 0;
+      if (v) rhs[r] = -(model.demand[i] as number);
     }
-    const variable = (i: number): boolean =>
-      (row[i] as number) >= 0 && fixedNow[i] === 0 && reached[i] === 1;
     for (let k = 0; k < total; k++) {
       const a = from[k] as number;
       const b = to[k] as number;
-      const va = variable(a);
-      const vb = variable(b);
+      const va = isVar[a] === 1;
+      const vb = isVar[b] === 1;
       if (inMatrix[k] === 1) {
         const w = 1 / (slope[k] as number);
         const y = (Q[k] as number) - (loss[k] as number) * w;
@@ -502,7 +513,7 @@ function solveModel(
     }
     for (let i = 0; i < nodes; i++) {
       const r = row[i] as number;
-      if (r >= 0 && !variable(i)) {
+      if (r >= 0 && isVar[i] === 0) {
         values[diagPos[r] as number] = 1;
         rhs[r] = H[i] as number;
       }
@@ -519,7 +530,7 @@ function solveModel(
     iterations++;
     for (let i = 0; i < nodes; i++) {
       const r = row[i] as number;
-      if (r >= 0 && variable(i)) H[i] = rhs[r] as number;
+      if (r >= 0 && isVar[i] === 1) H[i] = rhs[r] as number;
     }
 
     // 5. New flows.
