@@ -118,7 +118,9 @@ describe('nested dissection and sparse Cholesky', () => {
           // Condition numbers stay below about 1e4 here (weights 0.1-10, diagonal >= 0.01):
           // both solves agree to 1e-10 of the solution's size.
           const scale = Math.max(1, ...ref.map(Math.abs));
-          ref.forEach((r, i) => expectAbsolute(x[i] ?? 0, r, 1e-10 * scale, `x[${i}]`));
+          ref.forEach((r, i) => {
+            expectAbsolute(x[i] ?? 0, r, 1e-10 * scale, `x[${i}]`);
+          });
         },
       ),
       { numRuns: 150 },
