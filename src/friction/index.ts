@@ -31,7 +31,6 @@ export { HAZEN_WILLIAMS_SI, hazenWilliamsHeadLoss } from './hazen-williams';
 export { laminar } from './laminar';
 export { reynolds, reynoldsFromFlow } from './reynolds';
 export { serghides } from './serghides';
-/** @internal */
 export { swameeJain } from './swamee-jain';
 export {
   LIMIT_RELATIVE_ROUGHNESS,

@@ -11,14 +11,16 @@
 export { applyNetworkCase } from './cases';
 export { outletCoefficient } from './outlet';
 export {
-  LOW_FLOW_VELOCITY,
   type LossComponent,
   type PipeRun,
   type PipeRunInput,
   pipeRun,
-  type RunFrictionLaw,
   type ValveCoefficient,
 } from './run';
+export {
+  LOW_FLOW_VELOCITY,
+  type RunFrictionLaw,
+} from './run-law';
 export {
   MAX_STATE_CHANGES,
   type PreparedNetwork,

@@ -8,13 +8,15 @@
  */
 export { type ParallelGroup, parallelGroup, parallelSplit } from './parallel';
 export {
-  checkRunRoughness,
-  type LossSlope,
   type RunContext,
   type RunEvaluator,
   type RunLossBreakdown,
-  runContext,
   runEvaluator,
   runLoss,
-  runLossSlope,
 } from './run';
+export {
+  checkRunRoughness,
+  type LossSlope,
+  runContext,
+  runLossSlope,
+} from './run-law';

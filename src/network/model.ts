@@ -17,16 +17,8 @@ import {
 } from '../guards';
 import { type Flow, STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from '../units/index';
 import { CLOSED, FCV, JUNCTION, OPEN, PRV, PSV, PUMP, RUN, SURFACE } from './codes';
-import {
-  checkRunRoughness,
-  type LossSlope,
-  pipeRun,
-  type RunContext,
-  type RunEvaluator,
-  runContext,
-  runEvaluator,
-  runLossSlope,
-} from './run';
+import { pipeRun, type RunContext, type RunEvaluator, runEvaluator } from './run';
+import { checkRunRoughness, type LossSlope, runContext, runLossSlope } from './run-law';
 import type { Topology } from './topology';
 import type {
   ControlValve,

@@ -5,7 +5,8 @@
  * @module
  * @internal
  */
-import { type LossSlope, type RunContext, type RunEvaluator, runLoss, runLossSlope } from './run';
+import { type RunContext, type RunEvaluator, runLoss } from './run';
+import { type LossSlope, runLossSlope } from './run-law';
 
 /** @internal A parallel group prepared for repeated splits (with its warm-start state). */
 export interface ParallelGroup {

@@ -23,13 +23,8 @@ import {
   SURFACE,
 } from './codes';
 import { buildModel, type Model, type PumpModel, powerLoss, pumpGain } from './model';
-import {
-  type LossSlope,
-  type RunContext,
-  type RunEvaluator,
-  type RunLossBreakdown,
-  runLossSlope,
-} from './run';
+import type { RunContext, RunEvaluator, RunLossBreakdown } from './run';
+import { type LossSlope, runLossSlope } from './run-law';
 import { buildTopology, type Topology } from './topology';
 import type {
   LinkSolution,
