@@ -9,6 +9,7 @@ export const publicModules = [
   'pipes',
   'friction',
   'losses',
+  'network',
   'system',
   'pumps',
   'design',

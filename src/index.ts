@@ -11,6 +11,7 @@ export { HeadflowError, type HeadflowErrorCode, type HeadflowErrorDetails } from
 export * from './fluids/index';
 export * from './friction/index';
 export * from './losses/index';
+export * from './network/index';
 export * from './pipes/index';
 export * from './pumps/index';
 export * from './report/index';

@@ -36,7 +36,13 @@ import {
   type SteelSchedule,
 } from '../pipes/index';
 import { type CataloguePoint, type PumpCurveInput, pumpCurve } from '../pumps/index';
-import type { LineElement, LossComponent, PipeRunInput, ValveCoefficient } from '../system/index';
+import type {
+  LineElement,
+  LossComponent,
+  PipeRunInput,
+  RunFrictionLaw,
+  ValveCoefficient,
+} from '../system/index';
 import type { Density, DynamicViscosity, Flow, Pressure, Temperature } from '../units/index';
 import { expecting, found, report, reportError } from './scenario-issues';
 import {
@@ -313,6 +319,48 @@ const equipment = v.pipe(
   }),
 );
 
+/** A run's stated friction law: a constant Darcy factor or a Hazen-Williams C. */
+const runFriction = v.pipe(
+  oneOf(
+    obj(
+      {
+        factor: opt(plainNumber('Darcy friction factor', 0, Number.POSITIVE_INFINITY, true)),
+        agedFactor: opt(
+          plainNumber('Darcy friction factor of aged pipe', 0, Number.POSITIVE_INFINITY, true),
+        ),
+        hazenWilliamsC: opt(
+          plainNumber('Hazen-Williams coefficient C', 0, Number.POSITIVE_INFINITY, true),
+        ),
+        agedHazenWilliamsC: opt(
+          plainNumber('Hazen-Williams C of aged pipe', 0, Number.POSITIVE_INFINITY, true),
+        ),
+      },
+      'a friction law',
+    ),
+    ['factor', 'hazenWilliamsC'],
+  ),
+  v.rawTransform<
+    {
+      factor?: number;
+      agedFactor?: number;
+      hazenWilliamsC?: number;
+      agedHazenWilliamsC?: number;
+    },
+    RunFrictionLaw
+  >((ctx) => {
+    const f = ctx.dataset.value;
+    if (f.factor !== undefined) {
+      return f.agedFactor === undefined
+        ? { factor: f.factor }
+        : { factor: f.factor, agedFactor: f.agedFactor };
+    }
+    const c = f.hazenWilliamsC as number;
+    return f.agedHazenWilliamsC === undefined
+      ? { hazenWilliamsC: c }
+      : { hazenWilliamsC: c, agedHazenWilliamsC: f.agedHazenWilliamsC };
+  }),
+);
+
 const runFields = {
   name: opt(text('run name')),
   length: quantity('length', 'nonNegative', 'length of straight pipe'),
@@ -331,14 +379,15 @@ const runFields = {
   valves: opt(list(valve, 'valves')),
   equipment: opt(list(equipment, 'equipment items')),
   rise: opt(quantity('length', 'any', 'rise from inlet to outlet (reported only)')),
+  friction: opt(runFriction),
 };
 
 /** A pipe run: length, size, wall, fittings, valves, equipment. */
 const run = v.pipe(
   oneOf(obj(runFields, 'a pipe run'), ['pipe', 'insideDiameter']),
   v.check(
-    (r) => given(r, ['material', 'roughness']).length > 0,
-    'give material or roughness (the wall roughness of new pipe)',
+    (r) => given(r, ['material', 'roughness', 'friction']).length > 0,
+    'give material or roughness (the wall roughness of new pipe), or a friction law',
   ),
   v.rawTransform<v.InferOutput<ReturnType<typeof obj<typeof runFields>>>, PipeRunInput>((ctx) => {
     const r = ctx.dataset.value;
@@ -354,6 +403,7 @@ const run = v.pipe(
       ...(r.valves === undefined ? {} : { valves: r.valves }),
       ...(r.equipment === undefined ? {} : { components: r.equipment }),
       ...(r.rise === undefined ? {} : { elevationChange: r.rise }),
+      ...(r.friction === undefined ? {} : { friction: r.friction }),
     };
     return out;
   }),

@@ -94,6 +94,10 @@ export interface JsonRun {
   readonly reynolds: number | null;
   readonly regime: RunDetails['regime'];
   readonly frictionFactor: number | null;
+  /** The friction law: `darcy-weisbach` (the policy), `constant-factor` or `hazen-williams`. */
+  readonly law: RunDetails['law'];
+  /** The stated friction factor or Hazen-Williams C, or null for the policy. */
+  readonly lawValue: number | null;
   readonly pipeLoss: JsonQuantity | null;
   readonly fittingsLoss: JsonQuantity | null;
   readonly componentLoss: JsonQuantity | null;
@@ -329,6 +333,8 @@ function run(r: RunDetails, u: DisplayUnits): JsonRun {
     reynolds: round(r.reynolds),
     regime: r.regime,
     frictionFactor: round(r.frictionFactor),
+    law: r.law,
+    lawValue: r.lawValue ?? null,
     pipeLoss: quantity(r.pipeLoss, u.head),
     fittingsLoss: quantity(r.fittingsLoss, u.head),
     componentLoss: quantity(r.componentLoss, u.head),

@@ -18,8 +18,9 @@ export {
   type PipeRun,
   type PipeRunInput,
   pipeRun,
+  type RunFrictionLaw,
   type ValveCoefficient,
-} from './run';
+} from '../network/index';
 export {
   applyCase,
   dutyFor,

@@ -7,7 +7,19 @@
 import { argumentError, checkFinite, checkPositive, HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
-import { brent } from '../numeric/brent';
+import { type PipeRun, type PipeRunInput, pipeRun } from '../network/index';
+import {
+  checkRunRoughness,
+  type ParallelGroup,
+  parallelGroup,
+  parallelSplit,
+  type RunContext,
+  type RunEvaluator,
+  type RunLossBreakdown,
+  runContext,
+  runEvaluator,
+  runLoss,
+} from '../network/internal';
 import {
   type Acceleration,
   type Flow,
@@ -16,16 +28,6 @@ import {
   STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
-import {
-  type PipeRun,
-  type PipeRunInput,
-  pipeRun,
-  type RunContext,
-  type RunEvaluator,
-  type RunLossBreakdown,
-  runEvaluator,
-  runLoss,
-} from './run';
 
 /**
  * One end of the system: a liquid surface or a point in the line.
@@ -87,6 +89,10 @@ export interface RunDetails {
   readonly reynolds: number;
   readonly regime: 'none' | 'laminar' | 'transition' | 'turbulent';
   readonly frictionFactor: number;
+  /** The run's friction law: the friction policy, a stated factor, or Hazen-Williams. */
+  readonly law: PipeRun['law'];
+  /** The stated friction factor or Hazen-Williams C (undefined for the policy). */
+  readonly lawValue: number | undefined;
   /** Straight-pipe loss (m). */
   readonly pipeLoss: Length;
   /** Fittings and valves loss (m). */
@@ -132,6 +138,8 @@ export interface SystemCurve {
 interface Group {
   readonly name: string;
   readonly branches: readonly (readonly RunEvaluator[])[];
+  /** The group as the network core splits it (with its warm start). */
+  readonly split: ParallelGroup;
 }
 
 type Element =
@@ -143,59 +151,6 @@ function regimeOf(re: number): RunDetails['regime'] {
   if (re <= 2300) return 'laminar';
   if (re < 4000) return 'transition';
   return 'turbulent';
-}
-
-function branchLoss(branch: readonly RunEvaluator[], flow: number, ctx: RunContext): number {
-  let h = 0;
-  for (const ev of branch) h += runLoss(ev, flow, ctx);
-  return h;
-}
-
-/** Flow through one branch whose loss equals `head` (m); `hint` is a flow that overshoots. */
-function branchFlowAt(
-  branch: readonly RunEvaluator[],
-  head: number,
-  hint: number,
-  ctx: RunContext,
-): number {
-  if (head <= 0) return 0;
-  let hi = hint > 0 ? hint : 1e-6;
-  let guard = 0;
-  while (branchLoss(branch, hi, ctx) < head) {
-    hi *= 2;
-    if (++guard > 200) {
-      throw new HeadflowError('NO_SOLUTION', `a parallel branch cannot take a head of ${head} m.`);
-    }
-  }
-  return brent((q) => branchLoss(branch, q, ctx) - head, 0, hi, { xTolerance: hi * 1e-15 }).root;
-}
-
-/**
- * Splits a total flow among parallel branches so that every branch has the same head loss;
- * returns that head loss (m) and writes branch flows into `flows`.
- */
-function splitFlow(group: Group, total: number, ctx: RunContext, flows: Float64Array): number {
-  if (total === 0) {
-    flows.fill(0);
-    return 0;
-  }
-  // The common loss cannot exceed the loss of any branch carrying the whole flow.
-  let hMax = Number.POSITIVE_INFINITY;
-  for (const b of group.branches) hMax = Math.min(hMax, branchLoss(b, total, ctx));
-  const result = brent(
-    (h) => {
-      let sum = 0;
-      for (const b of group.branches) sum += branchFlowAt(b, h, total, ctx);
-      return sum - total;
-    },
-    0,
-    hMax,
-    { xTolerance: hMax * 1e-14 },
-  );
-  group.branches.forEach((b, i) => {
-    flows[i] = branchFlowAt(b, result.root, total, ctx);
-  });
-  return result.root;
 }
 
 function endpointVelocity(e: Endpoint, flow: number): number {
@@ -247,7 +202,9 @@ function checkFluid(fluid: FluidState, suction: Endpoint): void {
  * (incompressible, isothermal liquid). Each run loses `f (L/D) V^2/(2g)` (Darcy-Weisbach, f
  * from `frictionFactor` with the definition's policy) plus `K V^2/(2g)` for its fittings and
  * valves plus its equipment's losses. Parallel groups split the flow so that every branch
- * has the same loss (solved by nested Brent root finding to 1e-14 of the head).
+ * has the same loss, solved by the network core's global gradient step (Todini and Pilati
+ * 1988) on the group's two nodes, to 1e-13 of the loss; each evaluation starts from the last
+ * split, so a curve evaluated along nearby flows needs two to five steps per group.
  *
  * With the default `'conservative'` transition rule the friction factor jumps up at Re 2300
  * (laminar to the larger turbulent value), so a loss is discontinuous there; a parallel branch
@@ -283,13 +240,19 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     throw argumentError('INVALID_ARGUMENT', 'runs', 0, 'runs', 'at least one run');
   }
   const aged = definition.aged === true;
-  const ctx: RunContext = {
-    density: fluid.density,
-    kinematicViscosity: fluid.kinematicViscosity,
+  const ctx: RunContext = runContext(
+    fluid.density,
+    fluid.kinematicViscosity,
     g,
-    friction: definition.friction,
-  };
+    definition.friction,
+  );
   const elements = buildLine(definition.runs, aged);
+  for (const el of elements) {
+    if (el.kind === 'run') checkRunRoughness(el.ev.run, definition.friction);
+    else
+      for (const b of el.group.branches)
+        for (const ev of b) checkRunRoughness(ev.run, definition.friction);
+  }
   const rhoG = fluid.density * g;
   const staticHead =
     discharge.elevation - suction.elevation + (discharge.pressure - suction.pressure) / rhoG;
@@ -302,7 +265,10 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
   const lossAt = (flow: number): number => {
     let h = 0;
     for (const el of elements) {
-      h += el.kind === 'run' ? runLoss(el.ev, flow, ctx) : splitFlow(el.group, flow, ctx, scratch);
+      h +=
+        el.kind === 'run'
+          ? runLoss(el.ev, flow, ctx)
+          : parallelSplit(el.group.split, flow, ctx, scratch);
     }
     return h;
   };
@@ -344,6 +310,8 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
         reynolds: b.reynolds,
         regime: regimeOf(b.reynolds),
         frictionFactor: b.frictionFactor,
+        law: ev.run.law,
+        lawValue: ev.run.lawValue,
         pipeLoss: b.pipeLoss as Length,
         fittingsLoss: b.fittingsLoss as Length,
         componentLoss: b.componentLoss as Length,
@@ -359,7 +327,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
         loss += push(el.ev, flow, undefined);
       } else {
         const flows = new Float64Array(el.group.branches.length);
-        loss += splitFlow(el.group, flow, ctx, flows);
+        loss += parallelSplit(el.group.split, flow, ctx, flows);
         el.group.branches.forEach((branch, j) => {
           for (const ev of branch) push(ev, flows[j] ?? 0, `${el.group.name} / branch ${j + 1}`);
         });
@@ -438,7 +406,10 @@ function buildLine(runs: readonly LineElement[], aged: boolean): Element[] {
         }
         return b.map((r) => runEvaluator(pipeRun(r, ++position, aged)));
       });
-      return { kind: 'parallel', group: { name: groupName, branches } };
+      return {
+        kind: 'parallel',
+        group: { name: groupName, branches, split: parallelGroup(branches) },
+      };
     }
     return { kind: 'run', ev: runEvaluator(pipeRun(el as PipeRunInput, ++position, aged)) };
   });

@@ -53,6 +53,8 @@ function run(name: string, flow: number, d: number, loss: number, rise: number):
     reynolds: (velocity * d) / 0.8e-6,
     regime: 'turbulent',
     frictionFactor: 0.0165,
+    law: 'darcy-weisbach',
+    lawValue: undefined,
     pipeLoss: si<'length'>(loss * 0.7),
     fittingsLoss: si<'length'>(loss * 0.3),
     componentLoss: si<'length'>(0),

@@ -5,10 +5,12 @@
  * @module
  */
 import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
-import { frictionFactor, LAMINAR_LIMIT } from '../friction/index';
+import type { FrictionFactorOptions } from '../friction/index';
+import type { FrictionPolicy } from '../friction/internal';
 import { type FittingCount, type FittingSet, fittingSet, kFromCv, kFromKv } from '../losses/index';
 import { type MaterialName, material, type PipeDimensions } from '../pipes/index';
 import type { Acceleration, Density, Flow, Length } from '../units/index';
+import { type LossSlope, lawOf, type RunFrictionLaw, runLossSlope } from './run-law';
 
 /**
  * A valve or restriction given by its flow coefficient, referred to the run's inside
@@ -55,6 +57,11 @@ export interface PipeRunInput {
   readonly components?: readonly LossComponent[];
   /** Rise of the run from inlet to outlet (m); informative, reported in details. */
   readonly elevationChange?: Length;
+  /**
+   * The run's friction law: a constant Darcy factor or a Hazen-Williams C instead of the
+   * system's Colebrook policy (default: the policy). Roughness is then not needed.
+   */
+  readonly friction?: RunFrictionLaw;
 }
 
 /** Loss breakdown of one run at one flow, filled by {@link PipeRun.lossInto}. */
@@ -81,6 +88,10 @@ export interface PipeRun {
   /** Sum of constant K from valves given by Cv/Kv/K (referred to this diameter). */
   readonly valveK: number;
   readonly elevationChange: Length | undefined;
+  /** The friction law: the system's Darcy-Weisbach policy, a constant f, or Hazen-Williams. */
+  readonly law: 'darcy-weisbach' | 'constant-factor' | 'hazen-williams';
+  /** The constant friction factor or Hazen-Williams C in use (undefined for the policy). */
+  readonly lawValue: number | undefined;
   readonly input: PipeRunInput;
 }
 
@@ -89,7 +100,9 @@ export interface RunContext {
   readonly density: number;
   readonly kinematicViscosity: number;
   readonly g: number;
-  readonly friction: Parameters<typeof frictionFactor>[2];
+  readonly friction: FrictionFactorOptions | undefined;
+  /** The policy resolved once. */
+  readonly policy: FrictionPolicy;
 }
 
 /** @internal A run with its precomputed loss evaluator. */
@@ -182,7 +195,11 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
       'Give insideDiameter or pipe.',
     );
   }
-  const roughness = roughnessOf(input, name, aged);
+  const { law, lawValue } = lawOf(input, name, aged);
+  const roughness =
+    law === 'darcy-weisbach' || input.roughness !== undefined || input.material !== undefined
+      ? roughnessOfLaw(input, name, aged, law)
+      : 0;
   const relativeRoughness = roughness / diameter;
   let kSum = 0;
   for (const [i, v] of (input.valves ?? []).entries()) {
@@ -200,8 +217,23 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
     area: (Math.PI * diameter * diameter) / 4,
     valveK: kSum,
     elevationChange: input.elevationChange,
+    law,
+    lawValue,
     input,
   });
+}
+
+function roughnessOfLaw(
+  input: PipeRunInput,
+  name: string,
+  aged: boolean,
+  law: PipeRun['law'],
+): number {
+  // A stated law needs no roughness: an aged case without an aged roughness keeps the new one.
+  if (law !== 'darcy-weisbach' && aged && input.agedRoughness === undefined) {
+    return roughnessOf(input, name, false);
+  }
+  return roughnessOf(input, name, aged);
 }
 
 /** @internal Precomputes a run's fittings for evaluation. */
@@ -216,7 +248,7 @@ export function runEvaluator(run: PipeRun): RunEvaluator {
 
 /**
  * @internal Head loss of a run at a flow (m); fills `out` with the breakdown when given.
- * Zero flow has zero loss. Allocates nothing.
+ * Zero flow has zero loss. Allocates nothing. The same law as {@link runLossSlope}.
  */
 export function runLoss(
   ev: RunEvaluator,
@@ -224,48 +256,7 @@ export function runLoss(
   ctx: RunContext,
   out?: RunLossBreakdown,
 ): number {
-  const run = ev.run;
-  const q = Math.abs(flow);
-  if (q === 0) {
-    if (out) {
-      out.velocity = 0;
-      out.reynolds = 0;
-      out.frictionFactor = Number.POSITIVE_INFINITY;
-      out.pipeLoss = 0;
-      out.fittingsLoss = 0;
-      out.componentLoss = 0;
-    }
-    return 0;
-  }
-  const d = run.insideDiameter;
-  const v = q / run.area;
-  const nu = ctx.kinematicViscosity;
-  const re = (v * d) / nu;
-  const velocityHead = (v * v) / (2 * ctx.g);
-  // Laminar (Re <= 2300, every friction policy gives 64/Re there): written as Hagen-Poiseuille,
-  // 32 nu L V / (g D^2), which stays finite as the flow tends to zero.
-  const laminar = re <= LAMINAR_LIMIT;
-  const f = laminar ? 64 / re : frictionFactor(re, run.relativeRoughness, ctx.friction);
-  const pipeLoss = laminar
-    ? (32 * nu * run.length * v) / (ctx.g * d * d)
-    : ((f * run.length) / d) * velocityHead;
-  // Fittings: K = K1/Re + K_turbulent, so K V^2/(2g) = K1 nu V / (2 g D) + K_turbulent V^2/(2g).
-  const fs = ev.fittings;
-  const fittingsLoss =
-    (fs === undefined ? 0 : (fs.laminar * nu * v) / (2 * ctx.g * d)) +
-    (run.valveK + (fs === undefined ? 0 : fs.turbulent)) * velocityHead;
-  let componentLoss = 0;
-  for (const c of ev.components) {
-    componentLoss += c.headLoss(q as Flow, ctx.density as Density, ctx.g as Acceleration);
-  }
-  if (out) {
-    out.velocity = v;
-    out.reynolds = re;
-    out.frictionFactor = f;
-    out.pipeLoss = pipeLoss;
-    out.fittingsLoss = fittingsLoss;
-    out.componentLoss = componentLoss;
-  }
-  const total = pipeLoss + fittingsLoss + componentLoss;
-  return flow < 0 ? -total : total;
+  return runLossSlope(ev, flow, ctx, SCRATCH, out);
 }
+
+const SCRATCH: LossSlope = { slope: 0 };
