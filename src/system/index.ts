@@ -5,14 +5,7 @@
  *
  * @module system
  */
-export { type ClosureSurge, type ClosureSurgeInput, closureSurgeHead } from './closure-surge';
-export { joukowskyHead } from './joukowsky';
-export {
-  PIPE_ANCHORINGS,
-  type PipeAnchoring,
-  type RestraintFactorInput,
-  restraintFactor,
-} from './restraint-factor';
+
 export {
   type LossComponent,
   type PipeRun,
@@ -21,6 +14,14 @@ export {
   type RunFrictionLaw,
   type ValveCoefficient,
 } from '../network/index';
+export { type ClosureSurge, type ClosureSurgeInput, closureSurgeHead } from './closure-surge';
+export { joukowskyHead } from './joukowsky';
+export {
+  PIPE_ANCHORINGS,
+  type PipeAnchoring,
+  type RestraintFactorInput,
+  restraintFactor,
+} from './restraint-factor';
 export {
   applyCase,
   dutyFor,
