@@ -4,6 +4,7 @@
  * @module
  */
 import { argumentError, checkPositive } from '../errors';
+import { guardRecord, guardString } from '../guards';
 import {
   type Density,
   type DynamicViscosity,
@@ -45,7 +46,11 @@ export interface ConstantFluidDefinition {
  * ```
  */
 export function constantFluid(definition: ConstantFluidDefinition): Fluid {
-  const { name, density, dynamicViscosity, vaporPressure } = definition;
+  const { name, density, dynamicViscosity, vaporPressure } = guardRecord(
+    'definition',
+    definition,
+  ) as unknown as ConstantFluidDefinition;
+  if (typeof name === 'string') guardString('name', name);
   if (typeof name !== 'string' || name.trim() === '') {
     throw argumentError('INVALID_ARGUMENT', 'name', name, undefined, 'a non-empty string');
   }

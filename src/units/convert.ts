@@ -1,4 +1,5 @@
 import { argumentError, checkFinite, HeadflowError } from '../errors';
+import { guardResult, guardString, kindOf } from '../guards';
 import {
   type DimensionOf,
   UNITS,
@@ -23,7 +24,7 @@ export function unitDefinition(symbol: unknown, parameter = 'unit'): UnitDefinit
   if (!isUnit(symbol)) {
     throw new HeadflowError(
       'UNKNOWN_UNIT',
-      `${parameter} ${typeof symbol === 'string' ? JSON.stringify(symbol) : String(symbol)} is not a known unit. ` +
+      `${parameter} ${typeof symbol === 'string' ? JSON.stringify(symbol.slice(0, 40)) : kindOf(symbol)} is not a known unit. ` +
         'Units are ASCII symbols such as m, ft, gal/min, m3/h, psi, kPa, degC (see unitsOf()).',
       { parameter, value: symbol, allowed: 'a unit symbol from the catalogue' },
     );
@@ -37,7 +38,7 @@ function toSI(value: number, def: UnitDefinition, symbol: string): number {
   if (def.dimension === 'temperature' && result < 0) {
     throw argumentError('OUT_OF_RANGE', 'value', value, symbol, 'at or above absolute zero (0 K)');
   }
-  return result;
+  return guardResult('value in SI', result, 'OUT_OF_RANGE');
 }
 
 /**
@@ -86,7 +87,7 @@ export function q<U extends UnitSymbol>(value: number, unit: U): Quantity<Dimens
 export function to<D extends Dimension>(quantity: Quantity<D>, unit: UnitOf<D>): number {
   const def = unitDefinition(unit);
   checkFinite('quantity', quantity, 'SI');
-  return quantity / def.factor - def.offset;
+  return guardResult('value', quantity / def.factor - def.offset, 'OUT_OF_RANGE');
 }
 
 /**
@@ -112,7 +113,7 @@ export function convert(value: number, from: string, into: string): number {
     );
   }
   checkFinite('value', value, from);
-  return toSI(value, a, from) / b.factor - b.offset;
+  return guardResult('value', toSI(value, a, from) / b.factor - b.offset, 'OUT_OF_RANGE');
 }
 
 /**
@@ -125,6 +126,7 @@ export function convert(value: number, from: string, into: string): number {
  * ```
  */
 export function unitsOf<D extends Dimension>(dimension: D): readonly UnitOf<D>[] {
+  guardString('dimension', dimension);
   const list = (Object.keys(UNITS) as UnitSymbol[]).filter(
     (u) => UNITS[u].dimension === dimension,
   ) as UnitOf<D>[];

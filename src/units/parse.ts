@@ -1,6 +1,7 @@
 import { argumentError, HeadflowError } from '../errors';
+import { guardOneOf, guardString } from '../guards';
 import type { UnitOf } from './catalogue';
-import { isUnit, q, to, unitDefinition } from './convert';
+import { DIMENSIONS, isUnit, q, to, unitDefinition } from './convert';
 import type { Dimension, Quantity } from './quantity';
 
 /** A number: optional sign, digits with optional comma thousands groups, fraction, exponent. */
@@ -33,8 +34,8 @@ function foldUnit(text: string): string {
  * @param text - for example `"350 ft"`, `"45 psi"`, `"60 degF"`
  * @param dimension - the dimension the caller expects; omit to accept any
  * @returns the quantity in coherent SI
- * @throws HeadflowError `INVALID_ARGUMENT` for an empty or malformed string or a missing unit,
- *   `UNKNOWN_UNIT` for a unit not in the catalogue, `WRONG_DIMENSION` when the unit is not of
+ * @throws HeadflowError `INVALID_ARGUMENT` for an empty or malformed string, a string over
+ *   200 characters, a missing unit or an unknown `dimension`, `UNKNOWN_UNIT` for a unit not in the catalogue, `WRONG_DIMENSION` when the unit is not of
  *   `dimension`, `OUT_OF_RANGE` for a temperature below absolute zero.
  * @example
  * ```ts
@@ -45,6 +46,8 @@ function foldUnit(text: string): string {
 export function parseQuantity<D extends Dimension>(text: string, dimension: D): Quantity<D>;
 export function parseQuantity(text: string): Quantity<Dimension>;
 export function parseQuantity(text: string, dimension?: Dimension): Quantity<Dimension> {
+  if (dimension !== undefined) guardOneOf('dimension', dimension, DIMENSIONS);
+  if (typeof text === 'string') guardString('text', text);
   if (typeof text !== 'string' || text.trim() === '') {
     throw argumentError(
       'INVALID_ARGUMENT',
