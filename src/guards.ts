@@ -149,12 +149,18 @@ export function guardBoolean(parameter: string, value: unknown): boolean {
 }
 
 /**
- * Returns `value` as a record (a non-null, non-array object) or throws `INVALID_ARGUMENT`.
+ * Returns `value` as a record (a non-null object that is not an array or a typed array) or
+ * throws `INVALID_ARGUMENT`.
  * Use for required object arguments (`system`, `pump`, `report`).
  * @internal
  */
 export function guardRecord(parameter: string, value: unknown): Readonly<Record<string, unknown>> {
-  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+  if (
+    typeof value !== 'object' ||
+    value === null ||
+    Array.isArray(value) ||
+    ArrayBuffer.isView(value)
+  ) {
     throw shapeError(parameter, value, 'an object');
   }
   return value as Readonly<Record<string, unknown>>;
@@ -220,6 +226,14 @@ export function guardArray(
       'INVALID_ARGUMENT',
       `${parameter} has ${value.length} items (allowed: ${allowed}).`,
       { parameter, value: value.length, allowed },
+    );
+  }
+  // An own `constructor` or iterator changes what map, slice and for-of do with the array.
+  if (Object.hasOwn(value, 'constructor') || Object.hasOwn(value, Symbol.iterator)) {
+    throw new HeadflowError(
+      'INVALID_ARGUMENT',
+      `${parameter} is an array with its own constructor or iterator, which is not allowed.`,
+      { parameter, allowed: 'a plain array' },
     );
   }
   for (let i = 0; i < value.length; i++) {

@@ -1,4 +1,5 @@
 import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
+import { guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -47,6 +48,7 @@ export interface NpshAvailableInput {
  * ```
  */
 export function npshAvailable(input: NpshAvailableInput): Length {
+  guardRecord('input', input);
   const g = input.g ?? STANDARD_GRAVITY;
   checkPositive('surfacePressure', input.surfacePressure, 'Pa');
   checkNonNegative('vaporPressure', input.vaporPressure, 'Pa');
@@ -54,9 +56,13 @@ export function npshAvailable(input: NpshAvailableInput): Length {
   checkFinite('staticHeadAboveImpeller', input.staticHeadAboveImpeller, 'm');
   checkNonNegative('suctionLoss', input.suctionLoss, 'm');
   checkPositive('g', g, 'm/s2');
-  return ((input.surfacePressure - input.vaporPressure) / (input.density * g) +
-    input.staticHeadAboveImpeller -
-    input.suctionLoss) as Length;
+  return guardResult(
+    'npshAvailable',
+    (input.surfacePressure - input.vaporPressure) / (input.density * g) +
+      input.staticHeadAboveImpeller -
+      input.suctionLoss,
+    'OUT_OF_RANGE',
+  ) as Length;
 }
 
 /** Input of {@link npshMargin}. */
@@ -108,6 +114,7 @@ export interface NpshMarginResult {
  * ```
  */
 export function npshMargin(input: NpshMarginInput): NpshMarginResult {
+  guardRecord('input', input);
   checkFinite('available', input.available, 'm');
   checkPositive('required', input.required, 'm');
   const ratioRule = input.marginRatio ?? 1.1;
@@ -118,9 +125,13 @@ export function npshMargin(input: NpshMarginInput): NpshMarginResult {
   checkNonNegative('minimumMargin', minimum, 'm');
   const requiredAvailable = Math.max(ratioRule * input.required, input.required + minimum);
   return {
-    ratio: input.available / input.required,
+    ratio: guardResult('ratio', input.available / input.required, 'OUT_OF_RANGE'),
     margin: (input.available - input.required) as Length,
-    requiredAvailable: requiredAvailable as Length,
+    requiredAvailable: guardResult(
+      'requiredAvailable',
+      requiredAvailable,
+      'OUT_OF_RANGE',
+    ) as Length,
     ok: input.available >= requiredAvailable,
   };
 }

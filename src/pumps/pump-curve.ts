@@ -5,6 +5,7 @@
  * @module
  */
 import { argumentError, checkPositive, HeadflowError } from '../errors';
+import { guardArray, guardNumber, guardRecord } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -141,7 +142,7 @@ export function pumpCurve(input: PumpCurveInput): PumpCurve {
 }
 
 function buildBase(input: PumpCurveInput): Base {
-  const { points } = input;
+  const { points } = guardRecord('input', input) as unknown as PumpCurveInput;
   checkPositive('speed', input.speed, 'rad/s');
   if (input.impellerDiameter !== undefined) {
     checkPositive('impellerDiameter', input.impellerDiameter, 'm');
@@ -155,6 +156,7 @@ function buildBase(input: PumpCurveInput): Base {
       'at least 3 catalogue points',
     );
   }
+  guardArray('points', points, { max: 10_000 });
   const n = points.length;
   const q: number[] = [];
   const h: number[] = [];
@@ -164,7 +166,8 @@ function buildBase(input: PumpCurveInput): Base {
   const pow: number[] = [];
   const npQ: number[] = [];
   const np: number[] = [];
-  points.forEach((p, i) => {
+  points.forEach((point, i) => {
+    const p = guardRecord(`points[${i}]`, point) as unknown as CataloguePoint;
     const flow = p.flow as number;
     const head = p.head as number;
     if (typeof flow !== 'number' || !Number.isFinite(flow) || flow < 0) {
@@ -457,6 +460,7 @@ function buildBase(input: PumpCurveInput): Base {
 }
 
 function checkRegion(name: string, r: readonly [number, number]): readonly [number, number] {
+  guardArray(name, r, { min: 2, max: 2 });
   const [lo, hi] = r;
   if (
     typeof lo !== 'number' ||
@@ -469,7 +473,7 @@ function checkRegion(name: string, r: readonly [number, number]): readonly [numb
     throw argumentError(
       'INVALID_ARGUMENT',
       name,
-      `[${String(lo)}, ${String(hi)}]`,
+      typeof lo === 'number' && typeof hi === 'number' ? `[${lo}, ${hi}]` : 'not two numbers',
       undefined,
       '[low, high] fractions of BEP flow with 0 <= low < high',
     );
@@ -539,6 +543,7 @@ class ScaledCurve implements PumpCurve {
   }
 
   private x(flow: number): number {
+    if (typeof flow !== 'number') guardNumber('flow', flow, 'm3/s');
     return inRange('catalogue', flow / this.qs, this.base.xMin, this.base.xMax, this.qs, 'm3/s');
   }
 
@@ -565,6 +570,7 @@ class ScaledCurve implements PumpCurve {
   npshRequired(flow: Flow): Length {
     const k = this.base.npsh;
     if (k === undefined) throw noData('NPSH required');
+    if (typeof flow !== 'number') guardNumber('flow', flow, 'm3/s');
     const x = inRange('NPSH-required', flow / this.rs, k.xMin, k.xMax, this.rs, 'm3/s');
     return (k.evaluate(x) * this.rs * this.rs) as Length;
   }

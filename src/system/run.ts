@@ -6,6 +6,15 @@
  */
 import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
 import { frictionFactor, LAMINAR_LIMIT } from '../friction/index';
+import {
+  guardArray,
+  guardBoolean,
+  guardFunction,
+  guardInteger,
+  guardRecord,
+  guardResult,
+  guardString,
+} from '../guards';
 import { type FittingCount, type FittingSet, fittingSet, kFromCv, kFromKv } from '../losses/index';
 import { type MaterialName, material, type PipeDimensions } from '../pipes/index';
 import type { Acceleration, Density, Flow, Length } from '../units/index';
@@ -61,7 +70,7 @@ export interface PipeRunInput {
 export interface RunLossBreakdown {
   velocity: number;
   reynolds: number;
-  frictionFactor: number;
+  frictionFactor: number | undefined;
   pipeLoss: number;
   fittingsLoss: number;
   componentLoss: number;
@@ -164,14 +173,19 @@ function valveK(valve: ValveCoefficient, diameter: Length, name: string): number
  * ```
  */
 export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRun {
-  const name = input.name ?? `run ${position}`;
+  guardInteger('position', position, 1, 1_000_000);
+  guardBoolean('aged', aged);
+  guardRecord(`runs[${position - 1}]`, input);
+  const name = input.name === undefined ? `run ${position}` : guardString('name', input.name);
   checkNonNegative(`${name}.length`, input.length, 'm');
   let diameter: number;
   if (input.insideDiameter !== undefined) {
     checkPositive(`${name}.insideDiameter`, input.insideDiameter, 'm');
     diameter = input.insideDiameter;
   } else if (input.pipe !== undefined) {
-    diameter = input.pipe.insideDiameter;
+    const pipe = guardRecord(`${name}.pipe`, input.pipe);
+    checkPositive(`${name}.pipe.insideDiameter`, pipe['insideDiameter'] as number, 'm');
+    diameter = pipe['insideDiameter'] as number;
   } else {
     throw argumentError(
       'INVALID_ARGUMENT',
@@ -185,8 +199,18 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
   const roughness = roughnessOf(input, name, aged);
   const relativeRoughness = roughness / diameter;
   let kSum = 0;
-  for (const [i, v] of (input.valves ?? []).entries()) {
-    kSum += valveK(v, diameter as Length, `${name}.valves[${i}]`);
+  const valves = guardArray(`${name}.valves`, input.valves ?? [], { max: 10_000 });
+  for (const [i, v] of valves.entries()) {
+    const at = `${name}.valves[${i}]`;
+    kSum += valveK(guardRecord(at, v) as ValveCoefficient, diameter as Length, at);
+  }
+  if (input.fittings !== undefined) guardArray(`${name}.fittings`, input.fittings, { max: 10_000 });
+  const components = guardArray(`${name}.components`, input.components ?? [], { max: 10_000 });
+  for (const [i, c] of components.entries()) {
+    guardFunction(
+      `${name}.components[${i}].headLoss`,
+      guardRecord(`${name}.components[${i}]`, c)['headLoss'],
+    );
   }
   if (input.elevationChange !== undefined)
     checkFinite(`${name}.elevationChange`, input.elevationChange, 'm');
@@ -197,7 +221,7 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
     insideDiameter: diameter as Length,
     roughness: roughness as Length,
     relativeRoughness,
-    area: (Math.PI * diameter * diameter) / 4,
+    area: guardResult(`${name}.area`, (Math.PI * diameter * diameter) / 4, 'OUT_OF_RANGE'),
     valveK: kSum,
     elevationChange: input.elevationChange,
     input,
@@ -205,6 +229,19 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
 }
 
 /** @internal Precomputes a run's fittings for evaluation. */
+/** The error for a component whose headLoss gave no finite number. */
+function badComponent(c: LossComponent, h: unknown, flow: number): never {
+  const name = typeof c.name === 'string' ? c.name : 'a component';
+  throw argumentError(
+    'INVALID_ARGUMENT',
+    `${name}.headLoss(${flow})`,
+    h,
+    'm',
+    'a finite head loss',
+    'A loss component must return a finite head loss (m) for every flow.',
+  );
+}
+
 export function runEvaluator(run: PipeRun): RunEvaluator {
   const list = run.input.fittings ?? [];
   return {
@@ -230,7 +267,8 @@ export function runLoss(
     if (out) {
       out.velocity = 0;
       out.reynolds = 0;
-      out.frictionFactor = Number.POSITIVE_INFINITY;
+      // No flow, no friction factor (64/Re has no value at Re = 0): reported as absent.
+      out.frictionFactor = undefined;
       out.pipeLoss = 0;
       out.fittingsLoss = 0;
       out.componentLoss = 0;
@@ -246,6 +284,8 @@ export function runLoss(
   // 32 nu L V / (g D^2), which stays finite as the flow tends to zero.
   const laminar = re <= LAMINAR_LIMIT;
   const f = laminar ? 64 / re : frictionFactor(re, run.relativeRoughness, ctx.friction);
+  // At a flow so small that 64/Re overflows, f has no finite value: reported as absent, as at
+  // zero flow (the Hagen-Poiseuille loss below stays finite).
   const pipeLoss = laminar
     ? (32 * nu * run.length * v) / (ctx.g * d * d)
     : ((f * run.length) / d) * velocityHead;
@@ -256,12 +296,14 @@ export function runLoss(
     (run.valveK + (fs === undefined ? 0 : fs.turbulent)) * velocityHead;
   let componentLoss = 0;
   for (const c of ev.components) {
-    componentLoss += c.headLoss(q as Flow, ctx.density as Density, ctx.g as Acceleration);
+    const h = c.headLoss(q as Flow, ctx.density as Density, ctx.g as Acceleration);
+    if (typeof h !== 'number' || !Number.isFinite(h)) badComponent(c, h, q);
+    componentLoss += h;
   }
   if (out) {
     out.velocity = v;
     out.reynolds = re;
-    out.frictionFactor = f;
+    out.frictionFactor = f < Number.POSITIVE_INFINITY ? f : undefined;
     out.pipeLoss = pipeLoss;
     out.fittingsLoss = fittingsLoss;
     out.componentLoss = componentLoss;

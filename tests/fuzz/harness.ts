@@ -318,6 +318,23 @@ export function nonFinitePath(
   return undefined;
 }
 
+function callerObjects(args: readonly unknown[]): Set<object> {
+  const set = new Set<object>();
+  const walk = (x: unknown, depth: number): void => {
+    if (typeof x !== 'object' || x === null || set.has(x) || depth > 12) return;
+    if (ArrayBuffer.isView(x)) return;
+    set.add(x);
+    if (Array.isArray(x)) {
+      for (let i = 0; i < x.length && i < 1000; i++) walk(x[i], depth + 1);
+    } else if (isPlain(x)) {
+      for (const k of Object.keys(x)) walk(x[k], depth + 1);
+    }
+  };
+  walk(args, 0);
+  set.delete(args as object);
+  return set;
+}
+
 function describeArgs(args: readonly unknown[]): string {
   try {
     const s = JSON.stringify(args, (_k, v: unknown) => {
@@ -326,6 +343,9 @@ function describeArgs(args: readonly unknown[]): string {
       if (typeof v === 'bigint') return `${v}n`;
       if (typeof v === 'symbol') return v.toString();
       if (typeof v === 'function') return 'function';
+      if (typeof v === 'object' && v !== null && !Array.isArray(v) && !isPlain(v)) {
+        return `(${(v as { constructor?: { name?: string } }).constructor?.name ?? 'object'})`;
+      }
       if (typeof v === 'string' && v.length > 80) return `${v.slice(0, 20)}...(${v.length} chars)`;
       return v;
     });
@@ -356,7 +376,10 @@ function callChecked(entry: FuzzEntry, args: readonly unknown[], valid: boolean)
     }
     return;
   }
-  const bad = nonFinitePath(result, new Set(), '$', entry.documentedInfinity);
+  // Objects the caller passed in and the function hands back unchanged (a run's `input`, a
+  // curve's `definition`) are the caller's, not results: they are not searched. Output
+  // buffers (typed arrays) are always searched.
+  const bad = nonFinitePath(result, callerObjects(args), '$', entry.documentedInfinity);
   if (bad !== undefined) {
     expect.fail(`${entry.name}(${describeArgs(args)}) returned a non-finite value at ${bad}`);
   }
