@@ -30,6 +30,7 @@ import {
 } from '../units/index';
 import { CAUTIONS } from './cautions';
 import { displayUnits } from './display-units';
+import { checkDesignShape } from './input-shape';
 import type {
   Arrangement,
   CandidateInput,
@@ -924,6 +925,7 @@ function curvesOf(
  * ```
  */
 export function evaluateDesign(input: DesignInput): DesignReport {
+  checkDesignShape(input);
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
   const limits = resolveLimits(input);
   checkLocation(input);

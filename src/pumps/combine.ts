@@ -18,7 +18,7 @@ function checkPumps(pumps: readonly Pump[]): void {
     throw argumentError('INVALID_ARGUMENT', 'pumps', 0, 'pumps', 'at least 1 pump');
   }
   guardArray('pumps', pumps, { max: 100 });
-  pumps.forEach((p, i) => guardPump(`pumps[${i}]`, p));
+  for (const [i, p] of pumps.entries()) guardPump(`pumps[${i}]`, p);
 }
 
 /** Efficiency of a combination from its head and the members' powers (unit density). */

@@ -106,7 +106,7 @@ export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
   guardRecord('input', input);
   const { pump, system, profile, density } = input;
   guardPump('pump', pump);
-  const systemHead = systemHeadOf('system', system);
+  const systemHeadOfRow = systemHeadOf('system', system);
   const g = input.g ?? STANDARD_GRAVITY;
   checkPositive('density', density, 'kg/m3');
   checkFraction('motorEfficiency', input.motorEfficiency);
@@ -155,7 +155,7 @@ export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
       });
       return;
     }
-    const systemHead = systemHeadOf('system', system)(row.flow) as Length;
+    const systemHead = systemHeadOfRow(row.flow) as Length;
     let speed: RotationalSpeed;
     let pumpHead: number;
     let eff: number;

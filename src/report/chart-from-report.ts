@@ -7,6 +7,7 @@
 import type { DesignReport, SampledCurve, UnitSystem } from '../design/index';
 import { displayUnits } from '../design/index';
 import { argumentError } from '../errors';
+import { guardOptions } from '../guards';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
 
@@ -17,7 +18,9 @@ export interface ChartFromReportOptions {
 }
 
 function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
-  return curves.map((c, i) => {
+  // A curve is drawn through two samples or more: one with fewer (a candidate whose curve
+  // could not be sampled) is left out of the chart rather than making the chart fail.
+  return curves.flatMap((c, i) => {
     if (c.flows.length !== c.values.length) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -27,10 +30,14 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
         'as many values as flows',
       );
     }
-    const points = c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) }));
-    return c.group === undefined
-      ? { name: c.name, points }
-      : { name: c.name, group: c.group, points };
+    // Samples without a finite flow and value (where a curve has no value) are not drawn.
+    const points = c.flows
+      .map((flow, k) => ({ flow, value: c.values[k] as number }))
+      .filter((p) => Number.isFinite(p.flow) && Number.isFinite(p.value));
+    if (points.length < 2) return [];
+    return [
+      c.group === undefined ? { name: c.name, points } : { name: c.name, group: c.group, points },
+    ];
   });
 }
 
@@ -59,22 +66,27 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
  */
 export function chartSpecFromReport(
   report: DesignReport,
-  options: ChartFromReportOptions = {},
+  options?: ChartFromReportOptions | null,
 ): ChartSpec {
-  const u = displayUnits(chosenUnits(report, options.units));
+  const o = guardOptions<ChartFromReportOptions>('options', options);
+  const u = displayUnits(chosenUnits(report, o.units as UnitSystem | undefined));
   const c = report.curves;
   return {
     title: report.name,
     units: { flow: u.flow, head: u.head },
     pumpCurves: series('curves.pumps', c.pumps),
     systemCurves: series('curves.systems', c.systems),
-    operatingPoints: c.points.map((p) => ({ name: p.name, flow: p.flow, head: p.head })),
-    preferredRegions: c.preferredRegions.map((r) => ({
-      name: r.name,
-      minFlow: r.minFlow,
-      maxFlow: r.maxFlow,
-      ...(r.group === undefined ? {} : { group: r.group }),
-    })),
+    operatingPoints: c.points
+      .filter((p) => Number.isFinite(p.flow) && Number.isFinite(p.head))
+      .map((p) => ({ name: p.name, flow: p.flow, head: p.head })),
+    preferredRegions: c.preferredRegions
+      .filter((r) => Number.isFinite(r.minFlow) && Number.isFinite(r.maxFlow))
+      .map((r) => ({
+        name: r.name,
+        minFlow: r.minFlow,
+        maxFlow: r.maxFlow,
+        ...(r.group === undefined ? {} : { group: r.group }),
+      })),
     efficiencyCurves: series('curves.efficiency', c.efficiency),
     npshRequired: series('curves.npshRequired', c.npshRequired),
     npshAvailable: series('curves.npshAvailable', c.npshAvailable),

@@ -6,6 +6,7 @@
  */
 import { type ScaleLinear, scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
+import { guardOptions } from '../guards';
 import { type Flow, type Length, to } from '../units/index';
 import { placeLabels } from './chart-labels';
 import type { ChartOptions, ChartPoint, ChartSeries, ChartSpec } from './chart-spec';
@@ -130,10 +131,11 @@ function tickCount(pixels: number, spacing: number): number {
  * svg.startsWith('<?xml'); // true; axes "Flow (L/s)" 0 to 30 and "Head (m)" 0 to 40
  * ```
  */
-export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string {
-  validateChart(spec, options);
-  const width = options.width ?? 800;
-  const height = options.height ?? 600;
+export function renderChart(spec: ChartSpec, options?: ChartOptions | null): string {
+  const o = guardOptions<ChartOptions>('options', options) as ChartOptions;
+  validateChart(spec, o);
+  const width = o.width ?? 800;
+  const height = o.height ?? 600;
   const fu = spec.units.flow;
   const hu = spec.units.head;
   const flowOf = (si: number): number => to(si as Flow, fu);

@@ -15,6 +15,7 @@ import type {
   UnitSystem,
 } from '../design/index';
 import { displayUnits } from '../design/index';
+import { guardOptions } from '../guards';
 import type { MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
 import { convert, type Dimension, type Quantity, si, to, type UnitOf } from '../units/index';
@@ -400,6 +401,7 @@ export interface JsonOptions {
  * doc.report.dutyFlow; // { value: 105, unit: 'm3/h' }
  * ```
  */
-export function renderJson(report: DesignReport, options: JsonOptions = {}): string {
-  return `${JSON.stringify(reportToPlain(report, options.units), null, 2)}\n`;
+export function renderJson(report: DesignReport, options?: JsonOptions | null): string {
+  const o = guardOptions<JsonOptions>('options', options);
+  return `${JSON.stringify(reportToPlain(report, o.units as UnitSystem | undefined), null, 2)}\n`;
 }

@@ -5,6 +5,7 @@
  * @module
  */
 import type { DesignReport, UnitSystem } from '../design/index';
+import { guardOptions } from '../guards';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits } from './format-values';
 
@@ -85,8 +86,9 @@ function blockLines(block: Block): string[] {
  * md.split('\n')[0]; // '# Pump selection report: process cooling loop'
  * ```
  */
-export function renderMarkdown(report: DesignReport, options: MarkdownOptions = {}): string {
-  const system = chosenUnits(report, options.units);
+export function renderMarkdown(report: DesignReport, options?: MarkdownOptions | null): string {
+  const o = guardOptions<MarkdownOptions>('options', options);
+  const system = chosenUnits(report, o.units as UnitSystem | undefined);
   const chunks = reportBlocks(report, system).map((b) => blockLines(b).join('\n'));
   return `${chunks.join('\n\n')}\n`;
 }

@@ -317,6 +317,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     friction: definition.friction,
   };
   const elements = buildLine(definition.runs, aged);
+  checkRoughness(elements, definition.friction);
   const rhoG = guardResult('fluid.density x g', fluid.density * g, 'OUT_OF_RANGE');
   const staticHead =
     discharge.elevation - suction.elevation + (discharge.pressure - suction.pressure) / rhoG;
@@ -454,6 +455,31 @@ export function runsOf(definition: SystemDefinition): readonly PipeRun[] {
 }
 
 /** Validates the line and builds each run's evaluator, numbering runs in flow order. */
+/**
+ * Refuses, when the curve is made, a run too rough for the friction policy (eps/D above 0.1
+ * without `allowLargeRoughness`), which would otherwise be refused only at the first flow that
+ * is turbulent: so that whatever builds a curve (the scenario reader) learns it at once.
+ */
+function checkRoughness(
+  elements: readonly Element[],
+  friction: FrictionFactorOptions | undefined,
+): void {
+  const runs = elements.flatMap((el) => (el.kind === 'run' ? [el.ev] : el.group.branches.flat()));
+  for (const ev of runs) {
+    try {
+      frictionFactor(1e5, ev.run.relativeRoughness, friction);
+    } catch (e) {
+      if (!(e instanceof HeadflowError)) throw e;
+      throw new HeadflowError(e.code, `${ev.run.name}: ${e.message}`, {
+        parameter: `${ev.run.name}.roughness`,
+        value: ev.run.roughness,
+        unit: 'm',
+        ...(e.allowed === undefined ? {} : { allowed: `eps/D ${e.allowed}` }),
+      });
+    }
+  }
+}
+
 /** The shape checks shared by {@link systemCurve} and {@link runsOf}. */
 function checkDefinition(definition: SystemDefinition): void {
   guardRecord('definition', definition);

@@ -1,0 +1,112 @@
+/**
+ * The shape check at the entry of every renderer: a report is an object whose lists are dense
+ * lists of objects and whose names are strings, so that a report built or edited by hand is
+ * refused with a HeadflowError naming the field (`duty[1]`, `candidates[0].cases`), never
+ * with a TypeError or a loop deep inside a table. Numbers that are missing or not finite are
+ * printed as a dash, as a missing value is.
+ *
+ * @module
+ * @internal
+ */
+import type { DesignReport } from '../design/index';
+import { HeadflowError } from '../errors';
+import { guardArray, guardNumber, guardRecord, guardString, kindOf } from '../guards';
+
+const MAX_ITEMS = 100_000;
+
+function records(path: string, list: unknown): readonly Readonly<Record<string, unknown>>[] {
+  return guardArray(path, list, { max: MAX_ITEMS }).map((x, i) => guardRecord(`${path}[${i}]`, x));
+}
+
+/** Nodes of a report searched at most (a report of the examples has a few thousand). */
+const MAX_NODES = 2_000_000;
+
+/**
+ * A report is plain data: numbers, strings, booleans, `undefined` or `null` in lists and plain
+ * objects. Anything else (a Symbol, a function, a bigint, an object without a prototype or of
+ * a class) cannot be printed and is refused, naming where it is.
+ */
+function checkPlainData(report: object): void {
+  const stack: [unknown, string, number][] = [[report, 'report', 0]];
+  const seen = new Set<object>();
+  let nodes = 0;
+  while (stack.length > 0) {
+    const [x, path, depth] = stack.pop() as [unknown, string, number];
+    if (++nodes > MAX_NODES || depth > 32) {
+      throw new HeadflowError('INVALID_ARGUMENT', `${path} is nested too deep or too large.`, {
+        parameter: path,
+        allowed: `at most ${MAX_NODES} values, 32 levels deep`,
+      });
+    }
+    const t = typeof x;
+    if (x === null || t === 'undefined' || t === 'number' || t === 'string' || t === 'boolean') {
+      continue;
+    }
+    const proto: unknown = t === 'object' ? Object.getPrototypeOf(x) : undefined;
+    const plain = Array.isArray(x) || proto === Object.prototype;
+    if (!plain) {
+      throw new HeadflowError(
+        'INVALID_ARGUMENT',
+        `${path} is ${kindOf(x)}${t === 'object' ? ' that is not plain data' : ''}, which a report cannot hold.`,
+        { parameter: path, allowed: 'numbers, strings, booleans, lists and plain objects' },
+      );
+    }
+    if (seen.has(x as object)) continue;
+    seen.add(x as object);
+    if (Array.isArray(x)) {
+      guardArray(path, x, { max: MAX_ITEMS });
+      for (let i = 0; i < x.length; i++) stack.push([x[i], `${path}[${i}]`, depth + 1]);
+    } else {
+      for (const k of Object.keys(x as object)) {
+        stack.push([(x as Record<string, unknown>)[k], `${path}.${k}`, depth + 1]);
+      }
+    }
+  }
+}
+
+/** Throws `INVALID_ARGUMENT` naming the first part of `report` that has the wrong shape. */
+export function checkReportShape(report: DesignReport): void {
+  const r = guardRecord('report', report);
+  guardString('report.name', r['name'], 10_000);
+  if (r['fluid'] !== undefined) guardString('report.fluid', r['fluid'], 10_000);
+  for (const [i, d] of records('report.duty', r['duty']).entries()) {
+    guardString(`report.duty[${i}].case`, d['case'], 10_000);
+    records(`report.duty[${i}].runs`, d['runs']);
+  }
+  for (const [i, c] of records('report.candidates', r['candidates']).entries()) {
+    const at = `report.candidates[${i}]`;
+    guardString(`${at}.name`, c['name'], 10_000);
+    guardNumber(`${at}.count`, c['count']);
+    for (const [j, k] of records(`${at}.cases`, c['cases']).entries()) {
+      records(`${at}.cases[${j}].velocities`, k['velocities']);
+    }
+    records(`${at}.checks`, c['checks']);
+    for (const m of ['motor', 'dutyOnlyMotor', 'energy'] as const) {
+      if (c[m] !== undefined) guardRecord(`${at}.${m}`, c[m]);
+    }
+  }
+  records('report.checks', r['checks']);
+  for (const [i, text] of guardArray('report.cautions', r['cautions'], {
+    max: MAX_ITEMS,
+  }).entries()) {
+    guardString(`report.cautions[${i}]`, text, 100_000);
+  }
+  const curves = guardRecord('report.curves', r['curves']);
+  for (const k of ['systems', 'pumps', 'efficiency', 'npshRequired', 'npshAvailable'] as const) {
+    for (const [i, c] of records(`report.curves.${k}`, curves[k]).entries()) {
+      guardString(`report.curves.${k}[${i}].name`, c['name'], 10_000);
+      if (c['group'] !== undefined)
+        guardString(`report.curves.${k}[${i}].group`, c['group'], 10_000);
+      guardArray(`report.curves.${k}[${i}].flows`, c['flows'], { max: MAX_ITEMS });
+      guardArray(`report.curves.${k}[${i}].values`, c['values'], { max: MAX_ITEMS });
+    }
+  }
+  for (const k of ['preferredRegions', 'points'] as const) {
+    for (const [i, c] of records(`report.curves.${k}`, curves[k]).entries()) {
+      guardString(`report.curves.${k}[${i}].name`, c['name'], 10_000);
+      if (c['group'] !== undefined)
+        guardString(`report.curves.${k}[${i}].group`, c['group'], 10_000);
+    }
+  }
+  checkPlainData(r);
+}
