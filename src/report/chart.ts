@@ -112,9 +112,9 @@ function tickCount(pixels: number, spacing: number): number {
  * @param options - `width` and `height` in px (defaults 800 x 600)
  * @returns the SVG document, starting with an XML declaration
  * @throws HeadflowError `INVALID_ARGUMENT` naming the path of the value (for example
- *   `pumpCurves[1].points[3].value`) for a non-finite number, a negative flow or NPSH required,
+ *   `pumpCurves[1].points[3].value`) for a non-finite number, a negative flow,
  *   an efficiency outside 0..1, a band with `maxFlow < minFlow`, a series with fewer than 2
- *   points, a spec without any curve, or a width or height that is not > 0; `UNKNOWN_UNIT` or
+ *   points, a spec without any curve, or a width or height outside 100 to 20000 px; `UNKNOWN_UNIT` or
  *   `WRONG_DIMENSION` for `units.flow` / `units.head`.
  * @example
  * ```ts

@@ -71,7 +71,9 @@ export function checkReportShape(report: DesignReport): void {
   if (r['fluid'] !== undefined) guardString('report.fluid', r['fluid'], 10_000);
   for (const [i, d] of records('report.duty', r['duty']).entries()) {
     guardString(`report.duty[${i}].case`, d['case'], 10_000);
-    records(`report.duty[${i}].runs`, d['runs']);
+    for (const [j, run] of records(`report.duty[${i}].runs`, d['runs']).entries()) {
+      guardString(`report.duty[${i}].runs[${j}].name`, run['name'], 10_000);
+    }
   }
   for (const [i, c] of records('report.candidates', r['candidates']).entries()) {
     const at = `report.candidates[${i}]`;
