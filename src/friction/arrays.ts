@@ -69,7 +69,7 @@ export function colebrookInto(
   re: Float64Array,
   relativeRoughness: number | Float64Array,
   out: Float64Array,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): Float64Array {
   const n = checkLengths(re, relativeRoughness, out);
   const o = roughnessOptions(options);
@@ -113,7 +113,7 @@ export function frictionFactorInto(
   re: Float64Array,
   relativeRoughness: number | Float64Array,
   out: Float64Array,
-  options?: FrictionFactorOptions,
+  options?: FrictionFactorOptions | null,
 ): Float64Array {
   const n = checkLengths(re, relativeRoughness, out);
   const o = frictionOptions(options);

@@ -38,7 +38,11 @@ export function chenKernel(re: number, relativeRoughness: number): number {
  * chen(1e5, 1e-4); // 0.018552814878262533
  * ```
  */
-export function chen(re: number, relativeRoughness: number, options?: RoughnessOptions): number {
+export function chen(
+  re: number,
+  relativeRoughness: number,
+  options?: RoughnessOptions | null,
+): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return chenKernel(re, relativeRoughness);

@@ -51,7 +51,7 @@ export function churchillKernel(re: number, relativeRoughness: number): number {
 export function churchill(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));

@@ -140,7 +140,7 @@ export function checkColebrookReynolds(re: number, parameter = 're'): void {
 export function colebrook(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkReynolds(re);
   checkColebrookReynolds(re);
@@ -205,7 +205,7 @@ export interface ColebrookSolution {
 export function colebrookSolve(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): ColebrookSolution {
   const f = colebrook(re, relativeRoughness, options);
   return {

@@ -176,7 +176,7 @@ export function frictionFactorKernel(
 export function frictionFactor(
   re: number,
   relativeRoughness: number,
-  options?: FrictionFactorOptions,
+  options?: FrictionFactorOptions | null,
 ): number {
   checkReynolds(re);
   if (options === undefined || options === null) {

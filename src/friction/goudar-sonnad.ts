@@ -55,7 +55,7 @@ export function goudarSonnadKernel(re: number, relativeRoughness: number): numbe
 export function goudarSonnad(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));

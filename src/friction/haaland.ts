@@ -37,7 +37,11 @@ export function haalandKernel(re: number, relativeRoughness: number): number {
  * haaland(1e5, 1e-4); // 0.018265053014793857
  * ```
  */
-export function haaland(re: number, relativeRoughness: number, options?: RoughnessOptions): number {
+export function haaland(
+  re: number,
+  relativeRoughness: number,
+  options?: RoughnessOptions | null,
+): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return haalandKernel(re, relativeRoughness);

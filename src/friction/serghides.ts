@@ -50,7 +50,7 @@ export function serghidesKernel(re: number, relativeRoughness: number): number {
 export function serghides(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));

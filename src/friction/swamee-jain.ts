@@ -41,7 +41,7 @@ export function swameeJainKernel(re: number, relativeRoughness: number): number 
 export function swameeJain(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));

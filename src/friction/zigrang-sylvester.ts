@@ -42,7 +42,7 @@ export function zigrangSylvesterKernel(re: number, relativeRoughness: number): n
 export function zigrangSylvester(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkApproximationReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
