@@ -4,7 +4,7 @@
  * @module
  */
 import { argumentError, HeadflowError } from '../errors';
-import { guardArray, guardRecord, guardString } from '../guards';
+import { guardArray, guardRecord, guardResult, guardString } from '../guards';
 import { type MonotoneCubic, monotoneCubic } from '../numeric/index';
 import {
   type Density,
@@ -180,7 +180,11 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
         pressure,
         density: r as Density,
         dynamicViscosity: mu as DynamicViscosity,
-        kinematicViscosity: (mu / r) as KinematicViscosity,
+        kinematicViscosity: guardResult(
+          'kinematicViscosity',
+          mu / r,
+          'OUT_OF_RANGE',
+        ) as KinematicViscosity,
       };
       return logVapor === undefined
         ? state

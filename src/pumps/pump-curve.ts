@@ -5,7 +5,7 @@
  * @module
  */
 import { argumentError, checkPositive, HeadflowError } from '../errors';
-import { guardArray, guardNumber, guardRecord } from '../guards';
+import { guardArray, guardNumber, guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -593,7 +593,7 @@ class ScaledCurve implements PumpCurve {
       // Limit at zero flow: efficiency ~ eta'(0) x, so P -> rho g H(0) / eta'(0).
       p0 = (density * g * head.evaluate(x)) / efficiency.derivative(x);
     }
-    return (p0 * cube) as Power;
+    return guardResult('shaftPower', p0 * cube, 'OUT_OF_RANGE') as Power;
   }
 
   shares(flow: Flow): readonly PumpShare[] {

@@ -15,6 +15,7 @@ import type {
   UnitSystem,
 } from '../design/index';
 import { displayUnits } from '../design/index';
+import { HeadflowError } from '../errors';
 import { guardOptions } from '../guards';
 import type { MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
@@ -348,7 +349,7 @@ function curves(report: DesignReport, u: DisplayUnits): JsonCurves {
 export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnvelope {
   const system = chosenUnits(report, units);
   const u = displayUnits(system);
-  return {
+  return finiteOnly({
     format: REPORT_FORMAT,
     units: { ...u, energy: 'kWh' },
     report: {
@@ -363,7 +364,31 @@ export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnv
       cautions: [...report.cautions],
       curves: curves(report, u),
     },
-  };
+  });
+}
+
+/**
+ * Passes the envelope through when every number in it is finite. Missing values are already
+ * `null`; a number that is not finite here came from a field the report must fill (a count, a
+ * rank, a value copied as it is) and is refused, naming where it would have gone.
+ */
+function finiteOnly(envelope: JsonEnvelope): JsonEnvelope {
+  const stack: [unknown, string][] = [[envelope.report, 'report']];
+  while (stack.length > 0) {
+    const [x, path] = stack.pop() as [unknown, string];
+    if (typeof x === 'number' && !Number.isFinite(x)) {
+      throw new HeadflowError(
+        'INVALID_ARGUMENT',
+        `the report holds ${String(x)} where a finite number is required (${path}).`,
+        { parameter: path, value: x, allowed: 'a finite number' },
+      );
+    }
+    if (typeof x === 'object' && x !== null) {
+      for (const [k, v] of Object.entries(x))
+        stack.push([v, Array.isArray(x) ? `${path}[${k}]` : `${path}.${k}`]);
+    }
+  }
+  return envelope;
 }
 
 /** Options of {@link renderJson}. */

@@ -18,6 +18,16 @@ function records(path: string, list: unknown): readonly Readonly<Record<string, 
   return guardArray(path, list, { max: MAX_ITEMS }).map((x, i) => guardRecord(`${path}[${i}]`, x));
 }
 
+/** A list of checks: each with an id, severity, message and source that are strings. */
+function checks(path: string, list: unknown): void {
+  for (const [i, k] of records(path, list).entries()) {
+    for (const f of ['id', 'severity', 'message', 'source'] as const) {
+      guardString(`${path}[${i}].${f}`, k[f], 10_000);
+    }
+    guardRecord(`${path}[${i}].values`, k['values']);
+  }
+}
+
 /** Nodes of a report searched at most (a report of the examples has a few thousand). */
 const MAX_NODES = 2_000_000;
 
@@ -82,12 +92,14 @@ export function checkReportShape(report: DesignReport): void {
     for (const [j, k] of records(`${at}.cases`, c['cases']).entries()) {
       records(`${at}.cases[${j}].velocities`, k['velocities']);
     }
-    records(`${at}.checks`, c['checks']);
+    checks(`${at}.checks`, c['checks']);
     for (const m of ['motor', 'dutyOnlyMotor', 'energy'] as const) {
       if (c[m] !== undefined) guardRecord(`${at}.${m}`, c[m]);
     }
+    const energy = c['energy'] as Readonly<Record<string, unknown>> | undefined;
+    if (energy?.['cost'] !== undefined) guardRecord(`${at}.energy.cost`, energy['cost']);
   }
-  records('report.checks', r['checks']);
+  checks('report.checks', r['checks']);
   for (const [i, text] of guardArray('report.cautions', r['cautions'], {
     max: MAX_ITEMS,
   }).entries()) {

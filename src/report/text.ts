@@ -13,7 +13,7 @@ import { chosenUnits, oneLine } from './format-values';
 export interface TextOptions {
   /** Units to print in; default the report's own (`report.units`). */
   readonly units?: UnitSystem;
-  /** Longest line, in characters: an integer >= 40 (default 100). */
+  /** Longest line, in characters: an integer from 40 to 10000 (default 100). */
   readonly width?: number;
 }
 
