@@ -117,7 +117,7 @@ describe('values reported as absent, never Infinity', () => {
 describe('the scenario reader', () => {
   it('bounds numbers to physical ranges: motor efficiency 1e-300 %, Cv 1e-300, atFlow 1e-300 m3/h', () => {
     const a = file('canal-lift');
-    (a['candidates'] as Record<string, unknown>[])[0]!['motorEfficiency'] = '1e-300 %';
+    (a['candidates'] as [Record<string, unknown>])[0]['motorEfficiency'] = '1e-300 %';
     expect(() => readScenario(a)).toThrow(ScenarioFileError);
     const b = file('canal-lift');
     const run0 = ((b['line'] as Record<string, unknown>[])[1] as { run: Record<string, unknown> })
@@ -134,12 +134,15 @@ describe('the scenario reader', () => {
 
   it('refuses what evaluateDesign refuses: a blank candidate name, a pipe too rough when aged', () => {
     const a = file('orchard-tank');
-    (a['candidates'] as Record<string, unknown>[])[0]!['name'] = ' ';
+    (a['candidates'] as [Record<string, unknown>])[0]['name'] = ' ';
     expect(() => readScenario(a)).toThrow(ScenarioFileError);
     const b = file('orchard-tank');
-    const [suction, delivery] = (b['line'] as { run: Record<string, unknown> }[]).map((e) => e.run);
-    suction!['agedRoughness'] = '20 mm'; // eps/D about 0.2 in 4 in pipe
-    delivery!['agedRoughness'] = '0.01 mm';
+    const [suction, delivery] = b['line'] as [
+      { run: Record<string, unknown> },
+      { run: Record<string, unknown> },
+    ];
+    suction.run['agedRoughness'] = '20 mm'; // eps/D about 0.2 in 4 in pipe
+    delivery.run['agedRoughness'] = '0.01 mm';
     b['cases'] = [{ name: 'aged', aged: true }];
     const e = expectHeadflowError(() => readScenario(b), 'OUT_OF_RANGE');
     expect(e).toBeInstanceOf(ScenarioFileError);
