@@ -97,7 +97,8 @@ export function powerChain(input: PowerChainInput): PowerChain {
   checkFraction('driveEfficiency', drive);
   const shaft = hydraulic / input.pumpEfficiency;
   const motorInput = shaft / motor;
-  const driveInput = motorInput / drive;
+  // An efficiency of 1e-300 is in (0, 1] but leaves the floating-point range here.
+  const driveInput = guardResult('driveInput', motorInput / drive, 'OUT_OF_RANGE');
   return {
     hydraulic,
     shaft: shaft as Power,

@@ -540,6 +540,18 @@ class ScaledCurve implements PumpCurve {
       this.allowableRegion = { min: (a[0] * qb) as Flow, max: (a[1] * qb) as Flow };
     }
     this.fits = base.fits;
+    // A speed or diameter so far from the catalogue's that the scaled curve leaves the range
+    // of floating-point numbers (head r^2 overflowing, flows rounding to zero) is refused.
+    const top = base.head.evaluate(base.xMin) * this.hs;
+    if (!(this.hs > 0 && base.xMax * this.qs > 0)) {
+      throw new HeadflowError(
+        'OUT_OF_RANGE',
+        `the speed or impeller ratio ${rs * rd} scales the catalogue curve to nothing.`,
+        { parameter: 'speed', value: rs * rd, allowed: 'a ratio the curve can be scaled by' },
+      );
+    }
+    guardResult('scaled head', top, 'OUT_OF_RANGE');
+    guardResult('scaled flow', base.xMax * this.qs, 'OUT_OF_RANGE');
   }
 
   private x(flow: number): number {
