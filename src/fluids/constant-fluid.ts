@@ -4,7 +4,7 @@
  * @module
  */
 import { argumentError, checkPositive } from '../errors';
-import { guardRecord, guardString } from '../guards';
+import { guardRecord, guardResult, guardString } from '../guards';
 import {
   type Density,
   type DynamicViscosity,
@@ -68,7 +68,11 @@ export function constantFluid(definition: ConstantFluidDefinition): Fluid {
       'a finite absolute pressure >= 0 Pa',
     );
   }
-  const nu = (dynamicViscosity / density) as KinematicViscosity;
+  const nu = guardResult(
+    'kinematicViscosity',
+    dynamicViscosity / density,
+    'OUT_OF_RANGE',
+  ) as KinematicViscosity;
   const fill = (
     temperatures: ArrayLike<number>,
     out: Float64Array,
