@@ -13,6 +13,24 @@
  *
  * Runs: HEADFLOW_FUZZ_RUNS calls of each kind per function (default 1000 valid and 1000
  * hostile); CI fixes fast-check's seed (tests/setup/fast-check.ts).
+ *
+ * Adding a new export: add one row to the table of its module in tests/fuzz/entries/
+ * (basics.ts: units, fluids, pipes, friction, losses; machines.ts: system, network, pumps;
+ * documents.ts: design, scenario files, reports; a new module may get its own file, added to
+ * ENTRIES in tests/fuzz/exports.test.ts and run by a `<name>.test.ts` beside the others):
+ *
+ * ```ts
+ * {
+ *   name: 'headLossOf',                       // the export's name in src/index.ts
+ *   valid: fc.tuple(systemDefinition, flow),  // valid argument lists, across the domain
+ *   call: (d, q) => api.headLossOf(d, q),     // or the export itself: call: api.headLossOf
+ *   validMayThrow: ['NO_SOLUTION'],           // codes valid input may be refused with
+ * },
+ * ```
+ *
+ * Hostile calls need nothing more: they are made from the valid ones. Where the function
+ * returns an object with methods (a curve, a fluid), let `call` use them too, so that the
+ * methods meet hostile arguments. tests/fuzz/exports.test.ts fails while an export has no row.
  */
 import fc from 'fast-check';
 import { expect } from 'vitest';
