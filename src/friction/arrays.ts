@@ -78,7 +78,9 @@ export function colebrookInto(
     for (let i = 0; i < n; i++) {
       const r = re[i] as number;
       if (!(r >= COLEBROOK_MIN_REYNOLDS && r < Number.POSITIVE_INFINITY)) badRe(i, r);
-      out[i] = colebrookKernel(r, relativeRoughness);
+      const f = colebrookKernel(r, relativeRoughness);
+      if (!(f < Number.POSITIVE_INFINITY)) guardResult(`out[${i}]`, f, 'OUT_OF_RANGE');
+      out[i] = f;
     }
     return out;
   }
@@ -87,7 +89,9 @@ export function colebrookInto(
     const k = relativeRoughness[i] as number;
     if (!(r >= COLEBROOK_MIN_REYNOLDS && r < Number.POSITIVE_INFINITY)) badRe(i, r);
     checkRelativeRoughness(k, o);
-    out[i] = colebrookKernel(r, k);
+    const f = colebrookKernel(r, k);
+    if (!(f < Number.POSITIVE_INFINITY)) guardResult(`out[${i}]`, f, 'OUT_OF_RANGE');
+    out[i] = f;
   }
   return out;
 }

@@ -130,8 +130,9 @@ export function checkColebrookReynolds(re: number, parameter = 're'): void {
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor f (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and
- *   for Re below 1e-150.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`, for
+ *   Re below 1e-150, and for Re so large (above about 5e306 in a rough pipe) that the solver
+ *   leaves the floating-point range.
  * @example
  * ```ts
  * colebrook(1e5, 1e-4); // 0.018513866077471648 (45-digit solution 0.0185138660774716427)
@@ -145,7 +146,8 @@ export function colebrook(
   checkReynolds(re);
   checkColebrookReynolds(re);
   checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
-  return colebrookKernel(re, relativeRoughness);
+  // Above Re of about 5e306 (rough pipe) the correction step overflows: refused, not NaN.
+  return guardResult('colebrook', colebrookKernel(re, relativeRoughness), 'OUT_OF_RANGE');
 }
 
 /**

@@ -197,7 +197,11 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
     );
   }
   const roughness = roughnessOf(input, name, aged);
-  const relativeRoughness = roughness / diameter;
+  const relativeRoughness = guardResult(
+    `${name}.relativeRoughness`,
+    roughness / diameter,
+    'OUT_OF_RANGE',
+  );
   let kSum = 0;
   const valves = guardArray(`${name}.valves`, input.valves ?? [], { max: 10_000 });
   for (const [i, v] of valves.entries()) {

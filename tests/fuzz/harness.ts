@@ -57,6 +57,11 @@ export interface FuzzEntry {
   readonly identity?: boolean;
 }
 
+/** A test timeout that grows with the number of runs (given for the default 1000). */
+export function fuzzTimeout(ms: number): number {
+  return Math.ceil((ms * FUZZ_RUNS) / 1000);
+}
+
 /** Calls per kind (valid, hostile) and per function. */
 export const FUZZ_RUNS = Math.max(
   1000,
