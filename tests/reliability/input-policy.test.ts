@@ -8,8 +8,10 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
+  applyCase,
   chartSpecFromReport,
   chen,
+  churchill,
   colebrook,
   colebrookInto,
   colebrookResidual,
@@ -20,9 +22,11 @@ import {
   evaluateDesign,
   type Flow,
   fitting,
+  flowArea,
   frictionFactor,
   goudarSonnad,
   HeadflowError,
+  kFromCv,
   type Length,
   operatingPoint,
   type PipeRunInput,
@@ -30,6 +34,7 @@ import {
   pumpsInParallel,
   q,
   readScenario,
+  referK,
   renderChart,
   renderJson,
   renderMarkdown,
@@ -308,3 +313,53 @@ describe('systems', () => {
     expect(d.runs.map((r) => r.flow)).toEqual([flow, 0, flow]);
   });
 });
+
+describe('found by the fuzz suite beyond the listed defects', () => {
+  it('finite inputs whose result overflows are refused with OUT_OF_RANGE, not Infinity', () => {
+    expectHeadflowError(() => q(1e306, 'mi'), 'OUT_OF_RANGE');
+    expectHeadflowError(() => flowArea(1e300 as Length), 'OUT_OF_RANGE');
+    expectHeadflowError(() => kFromCv(1e-300, q(100, 'mm')), 'OUT_OF_RANGE');
+    // 0 x Infinity was NaN
+    expectHeadflowError(() => referK(0, 1e-300 as Length, q(1, 'm')), 'OUT_OF_RANGE');
+    expectHeadflowError(() => pumpCurveAt(8e299), 'OUT_OF_RANGE');
+  });
+
+  it('serghides at very large Re (its acceleration was 0/0), churchill at very low Re', () => {
+    expect(Number.isFinite(serghides(1e300, 0.1))).toBe(true);
+    // Churchill tends to 64/Re in laminar flow; (8/Re)^12 overflowed below Re 6e-25.
+    expectRelative(churchill(1e-30, 0), 64e30, 1e-12, 'churchill at Re 1e-30');
+    expectHeadflowError(() => colebrook(1.7e308, 0.1), 'OUT_OF_RANGE');
+  });
+
+  it('an array with its own constructor is refused (it broke map and slice)', () => {
+    const pumps = [quadraticPump()];
+    Object.defineProperty(pumps, 'constructor', { value: 1, enumerable: true });
+    expectHeadflowError(() => pumpsInParallel(pumps), 'INVALID_ARGUMENT');
+  });
+
+  it('a user system whose head is NaN is refused, naming the flow', () => {
+    const e = expectHeadflowError(
+      () =>
+        operatingPoint(quadraticPump(), {
+          staticHead: q(1, 'm'),
+          head: () => Number.NaN as Length,
+        }),
+      'INVALID_ARGUMENT',
+    );
+    expect(e.parameter).toBe('system.head');
+  });
+
+  it('applyCase copies only the fields a definition has', () => {
+    const base = JSON.parse('{"__proto__": {"x": 1}, "extra": 1}') as Record<string, unknown>;
+    const merged = applyCase({ ...line([run(10, 100)]), ...base } as SystemDefinition, {
+      name: 'low',
+    }) as unknown as Record<string, unknown>;
+    expect(Object.keys(merged)).not.toContain('__proto__');
+    expect(Object.keys(merged)).not.toContain('extra');
+  });
+});
+
+function pumpCurveAt(speedRatio: number) {
+  const p = quadraticPump();
+  return p.atSpeed((p.speed * speedRatio) as never);
+}
