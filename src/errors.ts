@@ -90,7 +90,12 @@ function safeString(x: unknown): string {
 
 /** Formats a value and its unit for a message: `"-3 m"`, `"NaN"`, `"'abc'"`. */
 export function describeValue(value: unknown, unit?: string): string {
-  if (typeof value === 'string') return JSON.stringify(value);
+  if (typeof value === 'string') {
+    // A huge string is named by its start and length, never copied whole into a message.
+    return value.length > 60
+      ? `${JSON.stringify(value.slice(0, 40))}... (${value.length} characters)`
+      : JSON.stringify(value);
+  }
   if (typeof value === 'number') return unit ? `${String(value)} ${unit}` : String(value);
   if (value === undefined) return 'undefined';
   if (value === null) return 'null';

@@ -11,7 +11,7 @@
  * @internal
  */
 
-import { argumentError, HeadflowError } from './errors';
+import { argumentError, HeadflowError, type HeadflowErrorCode } from './errors';
 
 /** Longest string a guard accepts where no other bound is given (names, ids, unit symbols). */
 export const MAX_NAME_LENGTH = 200;
@@ -149,12 +149,18 @@ export function guardBoolean(parameter: string, value: unknown): boolean {
 }
 
 /**
- * Returns `value` as a record (a non-null, non-array object) or throws `INVALID_ARGUMENT`.
+ * Returns `value` as a record (a non-null object that is not an array or a typed array) or
+ * throws `INVALID_ARGUMENT`.
  * Use for required object arguments (`system`, `pump`, `report`).
  * @internal
  */
 export function guardRecord(parameter: string, value: unknown): Readonly<Record<string, unknown>> {
-  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+  if (
+    typeof value !== 'object' ||
+    value === null ||
+    Array.isArray(value) ||
+    ArrayBuffer.isView(value)
+  ) {
     throw shapeError(parameter, value, 'an object');
   }
   return value as Readonly<Record<string, unknown>>;
@@ -220,6 +226,14 @@ export function guardArray(
       'INVALID_ARGUMENT',
       `${parameter} has ${value.length} items (allowed: ${allowed}).`,
       { parameter, value: value.length, allowed },
+    );
+  }
+  // An own `constructor` or iterator changes what map, slice and for-of do with the array.
+  if (Object.hasOwn(value, 'constructor') || Object.hasOwn(value, Symbol.iterator)) {
+    throw new HeadflowError(
+      'INVALID_ARGUMENT',
+      `${parameter} is an array with its own constructor or iterator, which is not allowed.`,
+      { parameter, allowed: 'a plain array' },
     );
   }
   for (let i = 0; i < value.length; i++) {
@@ -293,18 +307,28 @@ export function guardFunction<F extends (...args: never[]) => unknown>(
 }
 
 /**
- * Throws `NO_SOLUTION` or passes `value` through: the last line of defence at a public exit,
- * for a computed result that came out NaN or ±Infinity (a defect, or an input combination no
- * guard foresaw). A function that returns this never hands NaN to its caller.
+ * Throws `NO_SOLUTION` (or the given code) or passes `value` through: the last line of defence
+ * at a public exit, for a computed result that came out NaN or ±Infinity (a defect, or an input
+ * combination no guard foresaw). A function that returns this never hands NaN to its caller.
+ * Pass `'OUT_OF_RANGE'` where finite inputs can only overflow the floating-point range (a
+ * diameter of 1e300 m, a flow coefficient of 1e-300): the inputs are possible numbers, but the
+ * answer is not one.
  * @internal
  */
-export function guardResult(what: string, value: number): number {
+export function guardResult(
+  what: string,
+  value: number,
+  code: HeadflowErrorCode = 'NO_SOLUTION',
+): number {
   if (!Number.isFinite(value)) {
-    throw new HeadflowError(
-      'NO_SOLUTION',
-      `${what} came out as ${String(value)}; the inputs lie where the method gives no finite answer.`,
-      { parameter: what, value },
-    );
+    const why =
+      code === 'OUT_OF_RANGE'
+        ? 'the inputs lie beyond the range of floating-point numbers for this formula'
+        : 'the inputs lie where the method gives no finite answer';
+    throw new HeadflowError(code, `${what} came out as ${String(value)}; ${why}.`, {
+      parameter: what,
+      value,
+    });
   }
   return value;
 }

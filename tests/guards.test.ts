@@ -75,6 +75,30 @@ describe('shared guards', () => {
     expectHeadflowError(() => guardResult('f', Number.NaN), 'NO_SOLUTION');
   });
 
+  it('arrays with their own constructor or iterator, and typed arrays as records, are refused', () => {
+    const a = [1, 2];
+    Object.defineProperty(a, 'constructor', { value: 1, enumerable: true });
+    expectHeadflowError(() => guardArray('a', a), 'INVALID_ARGUMENT');
+    expectHeadflowError(() => guardRecord('options', new Float64Array(2)), 'INVALID_ARGUMENT');
+  });
+
+  it('results: NO_SOLUTION by default, OUT_OF_RANGE for an overflow', () => {
+    expect(guardResult('f', 0.02)).toBe(0.02);
+    const e = expectHeadflowError(
+      () => guardResult('area', Number.POSITIVE_INFINITY, 'OUT_OF_RANGE'),
+      'OUT_OF_RANGE',
+    );
+    expect(e.message).toContain('floating-point');
+  });
+
+  it('a huge string is named by its start and length in a message', () => {
+    const e = expectHeadflowError(
+      () => guardOneOf('m', 'x'.repeat(1e6), ['a'] as const),
+      'INVALID_ARGUMENT',
+    );
+    expect(e.message.length).toBeLessThan(200);
+  });
+
   it('HeadflowError constructs with any arguments', () => {
     const make = HeadflowError as unknown as new (...a: unknown[]) => HeadflowError;
     expect(() => new make()).not.toThrow();

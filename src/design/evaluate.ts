@@ -41,6 +41,7 @@ import {
 } from '../units/index';
 import { CAUTIONS } from './cautions';
 import { checkMessage } from './check-message';
+import { checkDesignShape } from './input-shape';
 import type {
   Arrangement,
   CandidateInput,
@@ -1227,6 +1228,7 @@ export function evaluateDesign(
 ): DesignReport {
   const o = guardOptions<EvaluateOptions>('options', options);
   const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
+  checkDesignShape(input);
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
   const units = input.units ?? 'si';
   if (units !== 'si' && units !== 'us') {

@@ -9,6 +9,7 @@
  */
 import * as v from 'valibot';
 import { HeadflowError } from '../errors';
+import { guardArray, guardOptions, guardString } from '../guards';
 import { assembleDesign } from './scenario-build';
 import { ScenarioFileError, type ScenarioIssue, scenarioIssues } from './scenario-issues';
 import { SCENARIO_FORMAT, scenarioObject } from './scenario-schema';
@@ -31,6 +32,43 @@ export const scenarioSchema = v.pipe(
     (ctx) => assembleDesign(ctx, ctx.dataset.value) ?? ctx.NEVER,
   ),
 );
+
+/** Longest scenario text {@link readScenario} accepts: 10 million characters. */
+export const MAX_SCENARIO_LENGTH = 10_000_000;
+
+/** Longest list a scenario file may hold (points, runs, fittings, cases ...). */
+const MAX_LIST = 100_000;
+/** Most values in one scenario file, and deepest nesting. */
+const MAX_VALUES = 1_000_000;
+const MAX_DEPTH = 64;
+
+/**
+ * Refuses, before any other work, a parsed file too large or too deep to be a scenario: a list
+ * of a million items would otherwise be checked item by item (seconds), and a hole in a list
+ * (possible only in a value built in code) is named here.
+ */
+function checkSize(value: unknown): void {
+  const stack: [unknown, string, number][] = [[value, '(file)', 0]];
+  let count = 0;
+  while (stack.length > 0) {
+    const [x, path, depth] = stack.pop() as [unknown, string, number];
+    if (++count > MAX_VALUES || depth > MAX_DEPTH) {
+      throw new HeadflowError(
+        'INVALID_ARGUMENT',
+        `the scenario file is too large or too deeply nested at ${path}.`,
+        { parameter: path, allowed: `at most ${MAX_VALUES} values, ${MAX_DEPTH} levels deep` },
+      );
+    }
+    if (typeof x !== 'object' || x === null) continue;
+    if (Array.isArray(x)) {
+      guardArray(path, x, { max: MAX_LIST });
+      for (let i = 0; i < x.length; i++) stack.push([x[i], `${path}[${i}]`, depth + 1]);
+    } else {
+      for (const k of Object.keys(x))
+        stack.push([(x as Record<string, unknown>)[k], `${path}.${k}`, depth + 1]);
+    }
+  }
+}
 
 /** Options of {@link readScenario}. */
 export interface ReadScenarioOptions {
@@ -90,8 +128,12 @@ function parseJson(text: string, source: string | undefined): unknown {
  * to(design.dutyFlow, 'L/s'); // 40, when the file says "duty": { "flow": "40 L/s" }
  * ```
  */
-export function readScenario(json: unknown, options: ReadScenarioOptions = {}): DesignInput {
-  const value = typeof json === 'string' ? parseJson(json, options.source) : json;
+export function readScenario(json: unknown, options?: ReadScenarioOptions | null): DesignInput {
+  const o = guardOptions<ReadScenarioOptions>('options', options);
+  const source = o.source === undefined ? undefined : guardString('options.source', o.source, 1000);
+  if (typeof json === 'string') guardString('json', json, MAX_SCENARIO_LENGTH);
+  const value = typeof json === 'string' ? parseJson(json, source) : json;
+  checkSize(value);
   const result = v.safeParse(scenarioSchema, value);
   if (result.success) return result.output;
   const issues = scenarioIssues(result.issues);
@@ -101,7 +143,7 @@ export function readScenario(json: unknown, options: ReadScenarioOptions = {}): 
   const [first, ...rest] = issues.map((issue, i) =>
     asWritten(issue, writtenAt(value, result.issues[i]?.path)),
   );
-  throw new ScenarioFileError([first as ScenarioIssue, ...rest], options.source);
+  throw new ScenarioFileError([first as ScenarioIssue, ...rest], source);
 }
 
 /** The file's own text at a path of an issue, when it is a string (`"200 ft"`). */

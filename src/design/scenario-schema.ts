@@ -255,12 +255,8 @@ const valve = v.pipe(
   oneOf(
     obj({
       name: opt(text('valve name')),
-      cv: opt(
-        plainNumber('flow coefficient Cv (US gal/min at 1 psi)', 0, Number.POSITIVE_INFINITY, true),
-      ),
-      kv: opt(
-        plainNumber('flow coefficient Kv (m3/h at 1 bar)', 0, Number.POSITIVE_INFINITY, true),
-      ),
+      cv: opt(plainNumber('flow coefficient Cv (US gal/min at 1 psi)', 0, 1e9, true, 1e-6)),
+      kv: opt(plainNumber('flow coefficient Kv (m3/h at 1 bar)', 0, 1e9, true, 1e-6)),
       k: opt(plainNumber('loss coefficient K', 0)),
     }),
     ['cv', 'kv', 'k'],

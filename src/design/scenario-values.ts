@@ -7,6 +7,7 @@
  */
 import * as v from 'valibot';
 import { HeadflowError } from '../errors';
+import { MAX_NAME_LENGTH } from '../guards';
 import {
   type Dimension,
   isUnit,
@@ -49,6 +50,46 @@ const BOUND_WORDS: Record<Bound, string> = {
   nonNegative: ' >= 0',
   positive: ' > 0',
 };
+
+/**
+ * Physical ranges of the quantities a scenario file may hold, in SI: the largest magnitude, and
+ * the smallest magnitude of a value that is not zero. They are wide (no pump station lies
+ * outside them) and exist to refuse what no file could mean: a motor efficiency of 1e-300 %, a
+ * flow of 1e-300 m3/h, a length of 1e300 ft, which would carry Infinity into a report.
+ */
+export const PHYSICAL_RANGE: Partial<
+  Record<Dimension, { readonly smallest: number; readonly largest: number }>
+> = {
+  length: { smallest: 1e-9, largest: 1e6 },
+  flow: { smallest: 1e-9, largest: 1e3 },
+  pressure: { smallest: 1e-3, largest: 1e9 },
+  temperature: { smallest: 1e-3, largest: 5000 },
+  density: { smallest: 1e-3, largest: 1e5 },
+  dynamicViscosity: { smallest: 1e-7, largest: 1e5 },
+  kinematicViscosity: { smallest: 1e-10, largest: 1e2 },
+  rotationalSpeed: { smallest: 1e-3, largest: 1e5 },
+  power: { smallest: 1e-3, largest: 1e10 },
+  velocity: { smallest: 1e-6, largest: 1e3 },
+  acceleration: { smallest: 1e-3, largest: 1e3 },
+};
+
+/** The physical range of a dimension in words, for messages: `"1e-9 to 1e6 m"`. */
+function rangeWords(dimension: Dimension): string {
+  const r = PHYSICAL_RANGE[dimension];
+  const unit = Object.keys(UNITS).find(
+    (u) => UNITS[u as keyof typeof UNITS].dimension === dimension,
+  );
+  return r === undefined ? '' : `0 or ${r.smallest} to ${r.largest} ${unit ?? ''} in size`.trim();
+}
+
+function physical(value: number, dimension: Dimension): boolean {
+  const r = PHYSICAL_RANGE[dimension];
+  const size = Math.abs(value);
+  return r === undefined || size === 0 || (size >= r.smallest && size <= r.largest);
+}
+
+/** Smallest fraction other than 0 that a file may give (0.1 %). */
+export const SMALLEST_FRACTION = 1e-3;
 
 function within(value: number, bound: Bound): boolean {
   if (bound === 'nonNegative') return value >= 0;
@@ -103,6 +144,14 @@ function readQuantity(
       const value = parseQuantity(input, dimension);
       if (!within(value, bound)) {
         report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
+        return undefined;
+      }
+      if (!physical(value, dimension)) {
+        report(
+          ctx,
+          'OUT_OF_RANGE',
+          `expected ${wanted} within the physical range ${rangeWords(dimension)}, found ${found(input)}`,
+        );
         return undefined;
       }
       return { value, dimension };
@@ -249,7 +298,8 @@ export function fraction(allowZero = false) {
         !Number.isFinite(value) ||
         value > 1 ||
         value < 0 ||
-        (value === 0 && !allowZero)
+        (value === 0 && !allowZero) ||
+        (value > 0 && value < SMALLEST_FRACTION)
       ) {
         report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
         return ctx.NEVER;
@@ -259,15 +309,24 @@ export function fraction(allowZero = false) {
   );
 }
 
-/** A plain number within [min, max] (finite). */
+/** Largest plain number a file may give where no other bound is stated (1e12). */
+export const LARGEST_PLAIN_NUMBER = 1e12;
+
+/**
+ * A plain number within [min, max] (finite, at most {@link LARGEST_PLAIN_NUMBER}); with
+ * `smallest`, a value other than 0 must be at least that large.
+ */
 export function plainNumber(
   what: string,
   min: number,
   max = Number.POSITIVE_INFINITY,
   open = false,
+  smallest = 0,
 ) {
   const range =
-    max === Number.POSITIVE_INFINITY ? `${open ? '>' : '>='} ${min}` : `from ${min} to ${max}`;
+    (max === Number.POSITIVE_INFINITY ? `${open ? '>' : '>='} ${min}` : `from ${min} to ${max}`) +
+    (smallest > 0 ? `, and 0 or at least ${smallest}` : '') +
+    (max === Number.POSITIVE_INFINITY ? `, at most ${LARGEST_PLAIN_NUMBER}` : '');
   const wanted = `${what} (a number ${range})`;
   return v.pipe(
     v.unknown(),
@@ -283,6 +342,8 @@ export function plainNumber(
         typeof input !== 'number' ||
         !Number.isFinite(input) ||
         input > max ||
+        input > LARGEST_PLAIN_NUMBER ||
+        (input !== 0 && Math.abs(input) < smallest) ||
         (open ? input <= min : input < min)
       ) {
         report(ctx, 'INVALID_ARGUMENT', `expected ${wanted}, found ${found(input)}`);
@@ -310,11 +371,16 @@ export function wholeNumber(what: string, min: number) {
   );
 }
 
-/** A non-empty string (a name). */
+/**
+ * A name: a string that is not empty or blank, of at most {@link MAX_NAME_LENGTH} characters
+ * (a blank name is refused here because the evaluator refuses it).
+ */
 export function text(what: string) {
   return v.pipe(
     v.string(expecting(`${what} (text)`)),
     v.minLength(1, expecting(`${what} (not empty)`)),
+    v.check((s) => s.trim() !== '', expecting(`${what} (not blank)`)),
+    v.maxLength(MAX_NAME_LENGTH, expecting(`${what} (at most ${MAX_NAME_LENGTH} characters)`)),
     v.description(what),
   );
 }

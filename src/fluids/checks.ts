@@ -4,9 +4,14 @@
  * @module
  */
 import { argumentError, HeadflowError } from '../errors';
+import { guardArray, guardBuffer } from '../guards';
 
 /** Refuses an output array whose length differs from the input's. @internal */
 export function checkSameLength(input: ArrayLike<number>, out: Float64Array): void {
+  if (!(input instanceof Float64Array || input instanceof Float32Array)) {
+    guardArray('temperatures', input);
+  }
+  guardBuffer('out', out, 0);
   if (out.length !== input.length) {
     throw argumentError(
       'INVALID_ARGUMENT',

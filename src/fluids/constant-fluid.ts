@@ -4,7 +4,7 @@
  * @module
  */
 import { argumentError, checkPositive } from '../errors';
-import { guardRange } from '../guards';
+import { guardRange, guardRecord, guardResult, guardString } from '../guards';
 import {
   type Density,
   type DynamicViscosity,
@@ -52,7 +52,11 @@ export interface ConstantFluidDefinition {
  * ```
  */
 export function constantFluid(definition: ConstantFluidDefinition): Fluid {
-  const { name, density, dynamicViscosity, vaporPressure } = definition;
+  const { name, density, dynamicViscosity, vaporPressure } = guardRecord(
+    'definition',
+    definition,
+  ) as unknown as ConstantFluidDefinition;
+  if (typeof name === 'string') guardString('name', name);
   if (typeof name !== 'string' || name.trim() === '') {
     throw argumentError('INVALID_ARGUMENT', 'name', name, undefined, 'a non-empty string');
   }
@@ -85,7 +89,11 @@ export function constantFluid(definition: ConstantFluidDefinition): Fluid {
       unit: 'J/(kg*K)',
     }) as SpecificHeat;
   }
-  const nu = (dynamicViscosity / density) as KinematicViscosity;
+  const nu = guardResult(
+    'kinematicViscosity',
+    dynamicViscosity / density,
+    'OUT_OF_RANGE',
+  ) as KinematicViscosity;
   const fill = (
     temperatures: ArrayLike<number>,
     out: Float64Array,

@@ -4,6 +4,7 @@
  * @module
  */
 import { argumentError, HeadflowError } from '../errors';
+import { guardArray, guardRecord, guardResult, guardString } from '../guards';
 import { type MonotoneCubic, monotoneCubic } from '../numeric/index';
 import {
   type Density,
@@ -82,7 +83,14 @@ function positive(value: unknown, parameter: string, unit: string): number {
  * ```
  */
 export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
-  const { name, rows, source } = definition;
+  // Every field is checked below; the record guard refuses null, arrays and non-objects.
+  const { name, rows, source } = guardRecord(
+    'definition',
+    definition,
+  ) as unknown as TabulatedFluidDefinition;
+  if (typeof name === 'string') guardString('name', name);
+  if (source !== undefined) guardString('source', source, 2000);
+  if (Array.isArray(rows)) guardArray('rows', rows, { max: 100_000 });
   if (typeof name !== 'string' || name.trim() === '') {
     throw argumentError('INVALID_ARGUMENT', 'name', name, undefined, 'a non-empty string');
   }
@@ -102,7 +110,7 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
   const lnPv = new Float64Array(n);
   const withPv = rows[0]?.vaporPressure !== undefined;
   for (let i = 0; i < n; i++) {
-    const row = rows[i] as FluidTableRow;
+    const row = guardRecord(`rows[${i}]`, rows[i]) as Partial<FluidTableRow>;
     t[i] = positive(row.temperature, `rows[${i}].temperature`, 'K');
     if (i > 0 && !((t[i] as number) > (t[i - 1] as number))) {
       throw argumentError(
@@ -184,7 +192,11 @@ export function tabulatedFluid(definition: TabulatedFluidDefinition): Fluid {
         pressure,
         density: r as Density,
         dynamicViscosity: mu as DynamicViscosity,
-        kinematicViscosity: (mu / r) as KinematicViscosity,
+        kinematicViscosity: guardResult(
+          'kinematicViscosity',
+          mu / r,
+          'OUT_OF_RANGE',
+        ) as KinematicViscosity,
       };
       if (bulkCurve) state.bulkModulus = bulkCurve.evaluate(temperature) as Pressure;
       if (heatCurve) state.specificHeat = heatCurve.evaluate(temperature) as SpecificHeat;

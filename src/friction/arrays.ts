@@ -1,14 +1,24 @@
 import { argumentError } from '../errors';
-import { colebrookKernel } from './colebrook';
+import { guardBuffer, guardResult } from '../guards';
+import { COLEBROOK_MIN_REYNOLDS, checkColebrookReynolds, colebrookKernel } from './colebrook';
 import {
   checkTransition,
   type FrictionFactorOptions,
   frictionFactorKernel,
+  frictionOptions,
   turbulentKernel,
 } from './friction-factor';
-import { checkRelativeRoughness, type RoughnessOptions } from './validate';
+import { checkRelativeRoughness, type RoughnessOptions, roughnessOptions } from './validate';
 
-function checkLengths(n: number, relativeRoughness: number | Float64Array, out: Float64Array) {
+function checkLengths(
+  re: Float64Array,
+  relativeRoughness: number | Float64Array,
+  out: Float64Array,
+): number {
+  if (!(re instanceof Float64Array)) guardBuffer('re', re, 0);
+  const n = re.length;
+  guardBuffer('out', out, 0);
+  if (typeof relativeRoughness !== 'number') guardBuffer('relativeRoughness', relativeRoughness, 0);
   if (out.length !== n) {
     throw argumentError(
       'INVALID_ARGUMENT',
@@ -27,9 +37,11 @@ function checkLengths(n: number, relativeRoughness: number | Float64Array, out: 
       `${n} (re.length)`,
     );
   }
+  return n;
 }
 
 function badRe(i: number, value: number): never {
+  if (value > 0) checkColebrookReynolds(value, `re[${i}]`);
   throw argumentError('INVALID_ARGUMENT', `re[${i}]`, value, undefined, 'a finite number > 0');
 }
 
@@ -57,25 +69,29 @@ export function colebrookInto(
   re: Float64Array,
   relativeRoughness: number | Float64Array,
   out: Float64Array,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): Float64Array {
-  const n = re.length;
-  checkLengths(n, relativeRoughness, out);
+  const n = checkLengths(re, relativeRoughness, out);
+  const o = roughnessOptions(options);
   if (typeof relativeRoughness === 'number') {
-    checkRelativeRoughness(relativeRoughness, options);
+    checkRelativeRoughness(relativeRoughness, o);
     for (let i = 0; i < n; i++) {
       const r = re[i] as number;
-      if (!(r > 0 && r < Number.POSITIVE_INFINITY)) badRe(i, r);
-      out[i] = colebrookKernel(r, relativeRoughness);
+      if (!(r >= COLEBROOK_MIN_REYNOLDS && r < Number.POSITIVE_INFINITY)) badRe(i, r);
+      const f = colebrookKernel(r, relativeRoughness);
+      if (!(f < Number.POSITIVE_INFINITY)) guardResult(`out[${i}]`, f, 'OUT_OF_RANGE');
+      out[i] = f;
     }
     return out;
   }
   for (let i = 0; i < n; i++) {
     const r = re[i] as number;
     const k = relativeRoughness[i] as number;
-    if (!(r > 0 && r < Number.POSITIVE_INFINITY)) badRe(i, r);
-    checkRelativeRoughness(k, options);
-    out[i] = colebrookKernel(r, k);
+    if (!(r >= COLEBROOK_MIN_REYNOLDS && r < Number.POSITIVE_INFINITY)) badRe(i, r);
+    checkRelativeRoughness(k, o);
+    const f = colebrookKernel(r, k);
+    if (!(f < Number.POSITIVE_INFINITY)) guardResult(`out[${i}]`, f, 'OUT_OF_RANGE');
+    out[i] = f;
   }
   return out;
 }
@@ -101,14 +117,14 @@ export function frictionFactorInto(
   re: Float64Array,
   relativeRoughness: number | Float64Array,
   out: Float64Array,
-  options?: FrictionFactorOptions,
+  options?: FrictionFactorOptions | null,
 ): Float64Array {
-  const n = re.length;
-  checkLengths(n, relativeRoughness, out);
-  const turbulent = turbulentKernel(options?.method);
-  const interpolate = checkTransition(options?.transition);
+  const n = checkLengths(re, relativeRoughness, out);
+  const o = frictionOptions(options);
+  const turbulent = turbulentKernel(o.method);
+  const interpolate = checkTransition(o.transition);
   const single = typeof relativeRoughness === 'number';
-  if (single) checkRelativeRoughness(relativeRoughness, options);
+  if (single) checkRelativeRoughness(relativeRoughness, o);
   for (let i = 0; i < n; i++) {
     const r = re[i] as number;
     if (!(r > 0 && r < Number.POSITIVE_INFINITY)) badRe(i, r);
@@ -117,9 +133,11 @@ export function frictionFactorInto(
       k = relativeRoughness;
     } else {
       k = relativeRoughness[i] as number;
-      checkRelativeRoughness(k, options);
+      checkRelativeRoughness(k, o);
     }
-    out[i] = frictionFactorKernel(r, k, turbulent, interpolate);
+    const f = frictionFactorKernel(r, k, turbulent, interpolate);
+    if (!(f < Number.POSITIVE_INFINITY)) guardResult(`out[${i}]`, f, 'OUT_OF_RANGE');
+    out[i] = f;
   }
   return out;
 }

@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link chen}. */
 export function chenKernel(re: number, relativeRoughness: number): number {
@@ -26,14 +31,19 @@ export function chenKernel(re: number, relativeRoughness: number): number {
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * chen(1e5, 1e-4); // 0.018552814878262533
  * ```
  */
-export function chen(re: number, relativeRoughness: number, options?: RoughnessOptions): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+export function chen(
+  re: number,
+  relativeRoughness: number,
+  options?: RoughnessOptions | null,
+): number {
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return chenKernel(re, relativeRoughness);
 }

@@ -1,10 +1,21 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import { guardResult } from '../guards';
+import {
+  checkRelativeRoughness,
+  checkReynolds,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link churchill}. */
 export function churchillKernel(re: number, relativeRoughness: number): number {
   const a = (2.457 * Math.log(1 / ((7 / re) ** 0.9 + 0.27 * relativeRoughness))) ** 16;
   const b = (37530 / re) ** 16;
-  return 8 * ((8 / re) ** 12 + (a + b) ** -1.5) ** (1 / 12);
+  const t = (a + b) ** -1.5;
+  if (re >= 8) return 8 * ((8 / re) ** 12 + t) ** (1 / 12);
+  // Below Re 8, 8 [(8/Re)^12 + t]^(1/12) written as (64/Re) [1 + t (Re/8)^12]^(1/12): the same
+  // value, but (8/Re)^12 no longer overflows to Infinity (it did below Re about 6e-25).
+  const r = re / 8;
+  return (8 / r) * (1 + t * r ** 12) ** (1 / 12);
 }
 
 /**
@@ -29,7 +40,8 @@ export function churchillKernel(re: number, relativeRoughness: number): number {
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`, and
+ *   where f is not a finite number (64/Re overflows, Re below about 3.6e-307).
  * @example
  * ```ts
  * churchill(1e5, 1e-4); // 0.018462624566280075
@@ -39,9 +51,9 @@ export function churchillKernel(re: number, relativeRoughness: number): number {
 export function churchill(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
   checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
-  return churchillKernel(re, relativeRoughness);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
+  return guardResult('churchill', churchillKernel(re, relativeRoughness), 'OUT_OF_RANGE');
 }

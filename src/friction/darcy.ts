@@ -1,4 +1,5 @@
 import { checkFinite, checkNonNegative, checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Acceleration, Density, Length, Pressure, Velocity } from '../units/index';
 import { STANDARD_GRAVITY } from '../units/index';
 
@@ -35,7 +36,11 @@ export function darcyHeadLoss(
   checkPositive('diameter', diameter, 'm');
   checkFinite('velocity', velocity, 'm/s');
   checkPositive('g', g, 'm/s2');
-  return ((frictionFactor * length * velocity * velocity) / (2 * g * diameter)) as Length;
+  return guardResult(
+    'darcyHeadLoss',
+    (frictionFactor * length * velocity * velocity) / (2 * g * diameter),
+    'OUT_OF_RANGE',
+  ) as Length;
 }
 
 /**
@@ -69,5 +74,9 @@ export function pressureDrop(
   checkPositive('diameter', diameter, 'm');
   checkFinite('velocity', velocity, 'm/s');
   checkPositive('density', density, 'kg/m3');
-  return ((frictionFactor * length * density * velocity * velocity) / (2 * diameter)) as Pressure;
+  return guardResult(
+    'pressureDrop',
+    (frictionFactor * length * density * velocity * velocity) / (2 * diameter),
+    'OUT_OF_RANGE',
+  ) as Pressure;
 }

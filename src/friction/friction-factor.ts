@@ -1,4 +1,5 @@
 import { argumentError } from '../errors';
+import { guardOptions, guardResult } from '../guards';
 import { chenKernel } from './chen';
 import { churchillKernel } from './churchill';
 import { colebrookKernel } from './colebrook';
@@ -6,7 +7,12 @@ import { goudarSonnadKernel } from './goudar-sonnad';
 import { haalandKernel } from './haaland';
 import { serghidesKernel } from './serghides';
 import { swameeJainKernel } from './swamee-jain';
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkRelativeRoughness,
+  checkReynolds,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 import { zigrangSylvesterKernel } from './zigrang-sylvester';
 
 /** Upper Reynolds number of the laminar regime in {@link frictionFactor} (common practice). */
@@ -88,6 +94,23 @@ export function turbulentKernel(
   }
 }
 
+/**
+ * Reads the options of {@link frictionFactor} and {@link frictionFactorInto}: `undefined` and
+ * `null` mean none; the method and transition names are checked where they are used.
+ * @internal
+ */
+export function frictionOptions(
+  options: FrictionFactorOptions | null | undefined,
+): FrictionFactorOptions {
+  if (options === undefined || options === null) return {};
+  const o = guardOptions<FrictionFactorOptions>('options', options);
+  return {
+    ...roughnessOptions(options),
+    ...(o.method === undefined ? {} : { method: o.method as TurbulentMethod }),
+    ...(o.transition === undefined ? {} : { transition: o.transition as TransitionRule }),
+  };
+}
+
 /** @internal Checks a transition rule name. */
 export function checkTransition(transition: TransitionRule | undefined): boolean {
   if (transition === undefined || transition === 'conservative') return false;
@@ -153,17 +176,27 @@ export function frictionFactorKernel(
 export function frictionFactor(
   re: number,
   relativeRoughness: number,
-  options?: FrictionFactorOptions,
+  options?: FrictionFactorOptions | null,
 ): number {
   checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
-  if (options === undefined) {
-    return frictionFactorKernel(re, relativeRoughness, colebrookKernel, false);
+  if (options === undefined || options === null) {
+    checkRelativeRoughness(relativeRoughness, undefined);
+    return guardResult(
+      'frictionFactor',
+      frictionFactorKernel(re, relativeRoughness, colebrookKernel, false),
+      'OUT_OF_RANGE',
+    );
   }
-  return frictionFactorKernel(
-    re,
-    relativeRoughness,
-    turbulentKernel(options.method),
-    checkTransition(options.transition),
+  const o = frictionOptions(options);
+  checkRelativeRoughness(relativeRoughness, o);
+  return guardResult(
+    'frictionFactor',
+    frictionFactorKernel(
+      re,
+      relativeRoughness,
+      turbulentKernel(o.method),
+      checkTransition(o.transition),
+    ),
+    'OUT_OF_RANGE',
   );
 }

@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 const A = 2 / Math.LN10;
 const D_PER_RE = Math.LN10 / 5.02;
@@ -40,7 +45,8 @@ export function goudarSonnadKernel(re: number, relativeRoughness: number): numbe
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * goudarSonnad(1e5, 1e-4); // 0.018513866077472442
@@ -49,9 +55,9 @@ export function goudarSonnadKernel(re: number, relativeRoughness: number): numbe
 export function goudarSonnad(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return goudarSonnadKernel(re, relativeRoughness);
 }

@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link haaland}. */
 export function haalandKernel(re: number, relativeRoughness: number): number {
@@ -25,14 +30,19 @@ export function haalandKernel(re: number, relativeRoughness: number): number {
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * haaland(1e5, 1e-4); // 0.018265053014793857
  * ```
  */
-export function haaland(re: number, relativeRoughness: number, options?: RoughnessOptions): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+export function haaland(
+  re: number,
+  relativeRoughness: number,
+  options?: RoughnessOptions | null,
+): number {
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return haalandKernel(re, relativeRoughness);
 }

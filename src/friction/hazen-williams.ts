@@ -1,4 +1,5 @@
 import { checkNonNegative, checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Flow, Length } from '../units/index';
 
 /** SI coefficient of the Hazen-Williams head-loss form (Q in m^3/s, D and h in m). */
@@ -49,6 +50,9 @@ export function hazenWilliamsHeadLoss(
   checkNonNegative('length', length, 'm');
   checkPositive('diameter', diameter, 'm');
   checkPositive('c', c);
-  return ((HAZEN_WILLIAMS_SI * length * flow ** Q_EXP) /
-    (c ** Q_EXP * diameter ** D_EXP)) as Length;
+  return guardResult(
+    'hazenWilliamsHeadLoss',
+    (HAZEN_WILLIAMS_SI * length * flow ** Q_EXP) / (c ** Q_EXP * diameter ** D_EXP),
+    'OUT_OF_RANGE',
+  ) as Length;
 }

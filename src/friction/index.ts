@@ -10,6 +10,7 @@ export { blasius } from './blasius';
 export { chen } from './chen';
 export { churchill } from './churchill';
 export {
+  COLEBROOK_MIN_REYNOLDS,
   type ColebrookSolution,
   colebrook,
   colebrookResidual,
@@ -35,6 +36,7 @@ export { swameeJain } from './swamee-jain';
 export {
   LIMIT_RELATIVE_ROUGHNESS,
   MAX_RELATIVE_ROUGHNESS,
+  MIN_APPROXIMATION_REYNOLDS,
   type RoughnessOptions,
 } from './validate';
 export { zigrangSylvester } from './zigrang-sylvester';

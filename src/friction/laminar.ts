@@ -1,3 +1,4 @@
+import { guardResult } from '../guards';
 import { checkReynolds } from './validate';
 
 /**
@@ -20,5 +21,5 @@ import { checkReynolds } from './validate';
  */
 export function laminar(re: number): number {
   checkReynolds(re);
-  return 64 / re;
+  return guardResult('laminar', 64 / re, 'OUT_OF_RANGE');
 }

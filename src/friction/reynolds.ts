@@ -1,4 +1,5 @@
 import { checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Flow, KinematicViscosity, Length, Velocity } from '../units/index';
 
 /**
@@ -22,7 +23,7 @@ export function reynolds(
   checkPositive('velocity', velocity, 'm/s');
   checkPositive('diameter', diameter, 'm');
   checkPositive('kinematicViscosity', kinematicViscosity, 'm2/s');
-  return (velocity * diameter) / kinematicViscosity;
+  return guardResult('reynolds', (velocity * diameter) / kinematicViscosity, 'OUT_OF_RANGE');
 }
 
 /**
@@ -47,5 +48,9 @@ export function reynoldsFromFlow(
   checkPositive('flow', flow, 'm3/s');
   checkPositive('diameter', diameter, 'm');
   checkPositive('kinematicViscosity', kinematicViscosity, 'm2/s');
-  return (4 * flow) / (Math.PI * diameter * kinematicViscosity);
+  return guardResult(
+    'reynoldsFromFlow',
+    (4 * flow) / (Math.PI * diameter * kinematicViscosity),
+    'OUT_OF_RANGE',
+  );
 }

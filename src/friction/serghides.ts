@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link serghides}. */
 export function serghidesKernel(re: number, relativeRoughness: number): number {
@@ -7,7 +12,9 @@ export function serghidesKernel(re: number, relativeRoughness: number): number {
   const b = -2 * Math.log10(k + (2.51 * a) / re);
   const c = -2 * Math.log10(k + (2.51 * b) / re);
   const d = b - a;
-  const s = a - (d * d) / (c - 2 * b + a);
+  const den = c - 2 * b + a;
+  // Where the three iterates already agree (very large Re), the acceleration is 0/0: keep c.
+  const s = den === 0 ? c : a - (d * d) / den;
   return 1 / (s * s);
 }
 
@@ -33,7 +40,8 @@ export function serghidesKernel(re: number, relativeRoughness: number): number {
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * serghides(1e5, 1e-4); // 0.01851358983180063
@@ -42,9 +50,9 @@ export function serghidesKernel(re: number, relativeRoughness: number): number {
 export function serghides(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return serghidesKernel(re, relativeRoughness);
 }

@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link swameeJain}. */
 export function swameeJainKernel(re: number, relativeRoughness: number): number {
@@ -26,7 +31,8 @@ export function swameeJainKernel(re: number, relativeRoughness: number): number 
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * swameeJain(1e5, 1e-4); // 0.01845244530756638 (Colebrook 0.0185138660774716)
@@ -35,9 +41,9 @@ export function swameeJainKernel(re: number, relativeRoughness: number): number 
 export function swameeJain(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return swameeJainKernel(re, relativeRoughness);
 }

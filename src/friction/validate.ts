@@ -1,4 +1,5 @@
 import { argumentError } from '../errors';
+import { guardBoolean, guardOptions } from '../guards';
 
 /**
  * Options shared by every friction-factor function.
@@ -29,6 +30,50 @@ export const LIMIT_RELATIVE_ROUGHNESS = 0.5;
 export function checkReynolds(re: number): void {
   if (typeof re !== 'number' || !(re > 0 && re < Number.POSITIVE_INFINITY)) {
     throw argumentError('INVALID_ARGUMENT', 're', re, undefined, 'a finite number > 0');
+  }
+}
+
+/**
+ * Reads the options of a friction-factor function: `undefined` and `null` mean none; anything
+ * else must be an object whose `allowLargeRoughness`, when present, is a boolean.
+ * @internal
+ */
+export function roughnessOptions(options: RoughnessOptions | null | undefined): RoughnessOptions {
+  const o = guardOptions<RoughnessOptions>('options', options);
+  if (o.allowLargeRoughness === undefined) return {};
+  return {
+    allowLargeRoughness: guardBoolean('options.allowLargeRoughness', o.allowLargeRoughness),
+  };
+}
+
+/**
+ * Smallest Reynolds number the explicit turbulent approximations (Swamee-Jain, Haaland,
+ * Serghides, Zigrang-Sylvester, Goudar-Sonnad, Chen) accept: 100. None of them was fitted
+ * below Re 4000 (turbulent flow); below about Re 13 some give no number at all (the argument
+ * of a logarithm turns negative: Goudar-Sonnad below about 2.2, Chen 7.1, Serghides 12.0,
+ * Zigrang-Sylvester 13.0 over eps/D 0..0.5) and Swamee-Jain and Haaland pass through a pole
+ * near Re 7. The bound is this project's choice, well clear of those and well below the
+ * laminar limit 2300 of {@link frictionFactor}, which never calls them lower.
+ */
+export const MIN_APPROXIMATION_REYNOLDS = 100;
+
+/**
+ * Throws `INVALID_ARGUMENT` for a Re that is not a finite number > 0 and `OUT_OF_RANGE` below
+ * {@link MIN_APPROXIMATION_REYNOLDS}.
+ * @internal
+ */
+export function checkApproximationReynolds(re: number): void {
+  checkReynolds(re);
+  if (re < MIN_APPROXIMATION_REYNOLDS) {
+    throw argumentError(
+      'OUT_OF_RANGE',
+      're',
+      re,
+      undefined,
+      `>= ${MIN_APPROXIMATION_REYNOLDS}`,
+      'The explicit approximations of Colebrook are turbulent-flow formulas; use colebrook(), ' +
+        'churchill() or frictionFactor() at low Re.',
+    );
   }
 }
 

@@ -1,4 +1,9 @@
-import { checkRelativeRoughness, checkReynolds, type RoughnessOptions } from './validate';
+import {
+  checkApproximationReynolds,
+  checkRelativeRoughness,
+  type RoughnessOptions,
+  roughnessOptions,
+} from './validate';
 
 /** @internal Unchecked kernel of {@link zigrangSylvester}. */
 export function zigrangSylvesterKernel(re: number, relativeRoughness: number): number {
@@ -27,7 +32,8 @@ export function zigrangSylvesterKernel(re: number, relativeRoughness: number): n
  * @param options - `allowLargeRoughness` to accept eps/D above 0.1
  * @returns the Darcy friction factor (dimensionless)
  * @throws HeadflowError `INVALID_ARGUMENT` for Re <= 0, NaN, Infinity, negative eps/D or
- *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness`.
+ *   eps/D > 0.5; `OUT_OF_RANGE` for 0.1 < eps/D <= 0.5 without `allowLargeRoughness` and for
+ *   Re below 100 ({@link MIN_APPROXIMATION_REYNOLDS}).
  * @example
  * ```ts
  * zigrangSylvester(1e5, 1e-4); // 0.01850021312358548
@@ -36,9 +42,9 @@ export function zigrangSylvesterKernel(re: number, relativeRoughness: number): n
 export function zigrangSylvester(
   re: number,
   relativeRoughness: number,
-  options?: RoughnessOptions,
+  options?: RoughnessOptions | null,
 ): number {
-  checkReynolds(re);
-  checkRelativeRoughness(relativeRoughness, options);
+  checkApproximationReynolds(re);
+  checkRelativeRoughness(relativeRoughness, roughnessOptions(options));
   return zigrangSylvesterKernel(re, relativeRoughness);
 }

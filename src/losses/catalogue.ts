@@ -5,6 +5,7 @@
  * @module
  */
 import { argumentError, checkPositive, type HeadflowError } from '../errors';
+import { guardOneOf, guardOptions, guardResult, guardString, MAX_NAME_LENGTH } from '../guards';
 import type { Length } from '../units/index';
 import { FITTINGS, type FittingId } from './catalogue-data';
 
@@ -97,6 +98,8 @@ export function fittingIds(): readonly FittingId[] {
  * ```
  */
 export function fitting(id: FittingId | (string & {})): Fitting {
+  // An id longer than any name a catalogue could hold is refused at once, before any search.
+  if (typeof id === 'string') guardString('id', id, MAX_NAME_LENGTH);
   const entry = typeof id === 'string' ? BY_ID.get(id) : undefined;
   if (entry === undefined) throw unknownFitting(id);
   return entry;
@@ -112,6 +115,24 @@ function unknownFitting(id: unknown): HeadflowError {
     `one of the ${IDS.length} catalogue ids (fittingIds())`,
     `Closest ids: ${close.map((x) => `'${x}'`).join(', ')}.`,
   );
+}
+
+/**
+ * Reads {@link FittingKOptions}: `undefined` and `null` mean none; `sizeDiameter` must be a
+ * finite length > 0 and `method` one of the three.
+ * @internal
+ */
+export function fittingOptions(options: FittingKOptions | null | undefined): FittingKOptions {
+  const o = guardOptions<FittingKOptions>('options', options);
+  const out: { method?: FittingMethod; sizeDiameter?: Length } = {};
+  if (o.method !== undefined) {
+    out.method = guardOneOf('options.method', o.method, ['3K', '2K', 'constant'] as const);
+  }
+  if (o.sizeDiameter !== undefined) {
+    checkPositive('sizeDiameter', o.sizeDiameter as number, 'm');
+    out.sizeDiameter = o.sizeDiameter as Length;
+  }
+  return out;
 }
 
 /** The method fittingK uses for `entry` under `options`; throws when it has no constants. */
@@ -196,13 +217,13 @@ export function fittingK(
   id: FittingId | (string & {}),
   re: number,
   diameter: Length,
-  options: FittingKOptions = {},
+  options?: FittingKOptions | null,
 ): number {
   const entry = fitting(id);
   checkReynoldsNumber(re);
   checkPositive('diameter', diameter, 'm');
-  const size = options.sizeDiameter ?? diameter;
-  if (options.sizeDiameter !== undefined) checkPositive('sizeDiameter', size, 'm');
-  const { laminar, turbulent } = kParts(entry, methodFor(entry, options.method), size);
-  return laminar / re + turbulent;
+  const o = fittingOptions(options);
+  const size = o.sizeDiameter ?? diameter;
+  const { laminar, turbulent } = kParts(entry, methodFor(entry, o.method), size);
+  return guardResult('fittingK', laminar / re + turbulent, 'OUT_OF_RANGE');
 }

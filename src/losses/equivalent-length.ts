@@ -1,4 +1,5 @@
 import { checkNonNegative, checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Length } from '../units/index';
 
 /**
@@ -25,7 +26,7 @@ export function equivalentLength(k: number, frictionFactor: number, diameter: Le
   checkNonNegative('k', k);
   checkPositive('frictionFactor', frictionFactor);
   checkPositive('diameter', diameter, 'm');
-  return ((k * diameter) / frictionFactor) as Length;
+  return guardResult('equivalentLength', (k * diameter) / frictionFactor, 'OUT_OF_RANGE') as Length;
 }
 
 /**
@@ -50,5 +51,5 @@ export function kFromEquivalentLength(
   checkNonNegative('length', length, 'm');
   checkPositive('frictionFactor', frictionFactor);
   checkPositive('diameter', diameter, 'm');
-  return (frictionFactor * length) / diameter;
+  return guardResult('kFromEquivalentLength', (frictionFactor * length) / diameter, 'OUT_OF_RANGE');
 }

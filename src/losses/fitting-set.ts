@@ -1,6 +1,14 @@
 import { argumentError, checkPositive } from '../errors';
+import { guardArray, guardBuffer, guardRecord, guardResult } from '../guards';
 import type { Length } from '../units/index';
-import { type FittingId, type FittingKOptions, fitting, kParts, methodFor } from './catalogue';
+import {
+  type FittingId,
+  type FittingKOptions,
+  fitting,
+  fittingOptions,
+  kParts,
+  methodFor,
+} from './catalogue';
 import { checkReynoldsNumber } from './validate';
 
 /** One line of a {@link fittingSet}: a catalogue id and how many of it. */
@@ -52,16 +60,18 @@ export interface FittingSet {
 export function fittingSet(
   items: readonly FittingCount[],
   diameter: Length,
-  options: FittingKOptions = {},
+  options?: FittingKOptions | null,
 ): FittingSet {
   checkPositive('diameter', diameter, 'm');
-  const size = options.sizeDiameter ?? diameter;
-  if (options.sizeDiameter !== undefined) checkPositive('sizeDiameter', size, 'm');
+  const o = fittingOptions(options);
+  const size = o.sizeDiameter ?? diameter;
+  guardArray('items', items, { max: 10_000 });
   let laminar = 0;
   let turbulent = 0;
-  items.forEach((item, i) => {
-    const entry = fitting(item.id);
-    const n = item.count ?? 1;
+  items.forEach((line, i) => {
+    const item = guardRecord(`items[${i}]`, line);
+    const entry = fitting(item['id'] as string);
+    const n = item['count'] ?? 1;
     if (typeof n !== 'number' || !Number.isInteger(n) || n < 0) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -71,13 +81,14 @@ export function fittingSet(
         'a whole number >= 0',
       );
     }
-    const parts = kParts(entry, methodFor(entry, options.method), size);
+    const parts = kParts(entry, methodFor(entry, o.method), size);
     laminar += n * parts.laminar;
     turbulent += n * parts.turbulent;
   });
+  guardResult('K', laminar + turbulent, 'OUT_OF_RANGE');
   const k = (re: number): number => {
     checkReynoldsNumber(re);
-    return laminar / re + turbulent;
+    return guardResult('K', laminar / re + turbulent, 'OUT_OF_RANGE');
   };
   return {
     diameter,
@@ -85,6 +96,8 @@ export function fittingSet(
     turbulent,
     k,
     kInto: (res: ArrayLike<number>, out: Float64Array): Float64Array => {
+      if (!(res instanceof Float64Array)) guardArray('re', res);
+      guardBuffer('out', out, 0);
       if (out.length !== res.length) {
         throw argumentError('INVALID_ARGUMENT', 'out', out.length, 'elements', `${res.length}`);
       }

@@ -1,4 +1,5 @@
 import { argumentError, checkFinite, checkPositive } from '../errors';
+import { guardArray, guardBuffer, guardRecord, guardResult } from '../guards';
 import { monotoneCubic } from '../numeric/index';
 import type { Acceleration, Density, Flow, Length, Pressure } from '../units/index';
 import { STANDARD_GRAVITY } from '../units/index';
@@ -38,22 +39,24 @@ function makeFixedLoss(drop: (flow: number) => number): FixedLoss {
   return {
     pressureDrop: (flow: Flow): Pressure => {
       checkFinite('flow', flow, 'm3/s');
-      return drop(flow) as Pressure;
+      return guardResult('pressureDrop', drop(flow), 'OUT_OF_RANGE') as Pressure;
     },
     headLoss: (flow: Flow, density: Density, g: Acceleration = STANDARD_GRAVITY): Length => {
       checkFinite('flow', flow, 'm3/s');
       checkPositive('density', density, 'kg/m3');
       checkPositive('g', g, 'm/s2');
-      return (drop(flow) / (density * g)) as Length;
+      return guardResult('headLoss', drop(flow) / (density * g), 'OUT_OF_RANGE') as Length;
     },
     pressureDropInto: (flows: ArrayLike<number>, out: Float64Array): Float64Array => {
+      if (!(flows instanceof Float64Array)) guardArray('flows', flows);
+      guardBuffer('out', out, 0);
       if (out.length !== flows.length) {
         throw argumentError('INVALID_ARGUMENT', 'out', out.length, 'elements', `${flows.length}`);
       }
       for (let i = 0; i < flows.length; i++) {
         const f = flows[i] as number;
         checkFinite(`flows[${i}]`, f, 'm3/s');
-        out[i] = drop(f);
+        out[i] = guardResult(`out[${i}]`, drop(f), 'OUT_OF_RANGE');
       }
       return out;
     },
@@ -79,8 +82,12 @@ function makeFixedLoss(drop: (flow: number) => number): FixedLoss {
  * ```
  */
 export function ratedLoss(rated: RatedPoint): RatedLoss {
+  guardRecord('rated', rated);
   checkPositive('flow', rated.flow, 'm3/s');
-  if (!(rated.pressureDrop >= 0 && Number.isFinite(rated.pressureDrop))) {
+  if (
+    typeof rated.pressureDrop !== 'number' ||
+    !(rated.pressureDrop >= 0 && Number.isFinite(rated.pressureDrop))
+  ) {
     throw argumentError(
       'INVALID_ARGUMENT',
       'pressureDrop',
@@ -89,7 +96,11 @@ export function ratedLoss(rated: RatedPoint): RatedLoss {
       'a finite number >= 0',
     );
   }
-  const coefficient = rated.pressureDrop / (rated.flow * rated.flow);
+  const coefficient = guardResult(
+    'coefficient',
+    rated.pressureDrop / (rated.flow * rated.flow),
+    'OUT_OF_RANGE',
+  );
   return { ...makeFixedLoss((q) => coefficient * q * Math.abs(q)), coefficient };
 }
 
@@ -143,11 +154,13 @@ export function curveLoss(points: readonly RatedPoint[]): CurveLoss {
       'at least 2 points',
     );
   }
+  guardArray('points', points, { max: 10_000 });
   const xs: number[] = [];
   const ys: number[] = [];
-  points.forEach((p, i) => {
-    const x = p.flow;
-    const y = p.pressureDrop;
+  points.forEach((point, i) => {
+    const p = guardRecord(`points[${i}]`, point);
+    const x = p['flow'];
+    const y = p['pressureDrop'];
     if (typeof x !== 'number' || !(x >= 0 && Number.isFinite(x))) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -205,7 +218,11 @@ export function curveLoss(points: readonly RatedPoint[]): CurveLoss {
   const cubic = monotoneCubic(xs, ys);
   const lastFlow = xs[xs.length - 1] as number;
   const lastDrop = ys[ys.length - 1] as number;
-  const scale = lastDrop / (lastFlow * lastFlow);
+  const scale = guardResult(
+    'pressureDrop / flow^2',
+    lastDrop / (lastFlow * lastFlow),
+    'OUT_OF_RANGE',
+  );
   const drop = (flow: number): number => {
     const a = Math.abs(flow);
     const dp = a <= lastFlow ? cubic.evaluate(a) : scale * a * a;

@@ -1,4 +1,5 @@
 import { checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Length } from '../units/index';
 
 /*
@@ -94,7 +95,7 @@ export function kFromCv(cv: number, diameter: Length): number {
   checkPositive('cv', cv);
   checkPositive('diameter', diameter, 'm');
   const d2 = diameter * diameter;
-  return (CV_CONSTANT * d2 * d2) / (cv * cv);
+  return guardResult('kFromCv', (CV_CONSTANT * d2 * d2) / (cv * cv), 'OUT_OF_RANGE');
 }
 
 /**
@@ -114,7 +115,7 @@ export function kFromCv(cv: number, diameter: Length): number {
 export function cvFromK(k: number, diameter: Length): number {
   checkPositive('k', k);
   checkPositive('diameter', diameter, 'm');
-  return diameter * diameter * Math.sqrt(CV_CONSTANT / k);
+  return guardResult('cvFromK', diameter * diameter * Math.sqrt(CV_CONSTANT / k), 'OUT_OF_RANGE');
 }
 
 /**
@@ -144,7 +145,7 @@ export function kFromKv(kv: number, diameter: Length): number {
   checkPositive('kv', kv);
   checkPositive('diameter', diameter, 'm');
   const d2 = diameter * diameter;
-  return (KV_CONSTANT * d2 * d2) / (kv * kv);
+  return guardResult('kFromKv', (KV_CONSTANT * d2 * d2) / (kv * kv), 'OUT_OF_RANGE');
 }
 
 /**
@@ -164,5 +165,5 @@ export function kFromKv(kv: number, diameter: Length): number {
 export function kvFromK(k: number, diameter: Length): number {
   checkPositive('k', k);
   checkPositive('diameter', diameter, 'm');
-  return diameter * diameter * Math.sqrt(KV_CONSTANT / k);
+  return guardResult('kvFromK', diameter * diameter * Math.sqrt(KV_CONSTANT / k), 'OUT_OF_RANGE');
 }

@@ -3,6 +3,9 @@
  * @internal
  */
 
+/** Characters of a wanted name that {@link closeNames} compares (longer than any catalogue name). */
+const COMPARED_LENGTH = 64;
+
 /** Levenshtein edit distance between two short strings. */
 export function editDistance(a: string, b: string): number {
   const row = new Float64Array(b.length + 1);
@@ -25,7 +28,10 @@ export function editDistance(a: string, b: string): number {
  * `wanted` come first, then the smallest edit distances.
  */
 export function closeNames(wanted: string, names: readonly string[], limit = 5): string[] {
-  const w = wanted.toLowerCase().trim();
+  // Only the first characters are compared: no name is longer, and the edit distance costs
+  // the product of the two lengths. The work is then linear in the length of `wanted` (one
+  // lower-casing pass) whatever the caller passes.
+  const w = wanted.slice(0, COMPARED_LENGTH).toLowerCase().trim();
   const words = w.split(/[^a-z0-9]+/).filter((x) => x.length > 1);
   const scored = names.map((name) => {
     const containsAll = words.length > 0 && words.every((x) => name.includes(x));

@@ -1,4 +1,5 @@
 import { checkFinite, checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Length } from '../units/index';
 
 /**
@@ -26,5 +27,5 @@ export function referK(k: number, fromDiameter: Length, toDiameter: Length): num
   checkPositive('toDiameter', toDiameter, 'm');
   const r = toDiameter / fromDiameter;
   const r2 = r * r;
-  return k * r2 * r2;
+  return guardResult('referK', k * r2 * r2, 'OUT_OF_RANGE');
 }

@@ -1,4 +1,5 @@
 import { checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Length } from '../units/index';
 import { checkConstant, checkReynoldsNumber, METRES_PER_INCH } from './validate';
 
@@ -45,5 +46,9 @@ export function threeK(k1: number, kInf: number, kd: number, re: number, diamete
   checkConstant('kd', kd);
   checkReynoldsNumber(re);
   checkPositive('diameter', diameter, 'm');
-  return k1 / re + kInf * (1 + kd / (diameter / METRES_PER_INCH) ** 0.3);
+  return guardResult(
+    'threeK',
+    k1 / re + kInf * (1 + kd / (diameter / METRES_PER_INCH) ** 0.3),
+    'OUT_OF_RANGE',
+  );
 }

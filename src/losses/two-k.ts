@@ -1,4 +1,5 @@
 import { checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Length } from '../units/index';
 import { checkConstant, checkReynoldsNumber, METRES_PER_INCH } from './validate';
 
@@ -34,5 +35,5 @@ export function twoK(k1: number, kInf: number, re: number, diameter: Length): nu
   checkConstant('kInf', kInf);
   checkReynoldsNumber(re);
   checkPositive('diameter', diameter, 'm');
-  return k1 / re + kInf * (1 + METRES_PER_INCH / diameter);
+  return guardResult('twoK', k1 / re + kInf * (1 + METRES_PER_INCH / diameter), 'OUT_OF_RANGE');
 }

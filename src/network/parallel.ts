@@ -21,8 +21,20 @@ export interface ParallelGroup {
   readonly pinLow: Float64Array;
   readonly pinHigh: Float64Array;
   readonly pins: Int32Array;
+  /** Count of branches without resistance (length 0, no fittings, valves or equipment). */
+  readonly bare: number;
+  /** 1 for a branch without resistance, else 0. */
+  readonly isBare: Uint8Array;
   /** Iterations of the last split (for benchmarks and tests). */
   lastIterations: number;
+}
+
+/** True when a run has no resistance at all: no length, fittings, valves or equipment. */
+function resistanceFree(ev: RunEvaluator): boolean {
+  const r = ev.run;
+  return (
+    r.length === 0 && ev.fittings === undefined && r.valveK === 0 && ev.components.length === 0
+  );
 }
 
 /** Most global gradient steps one split makes. */
@@ -62,8 +74,11 @@ function crossesKink(
 /** @internal Prepares a group for {@link parallelSplit}. */
 export function parallelGroup(branches: readonly (readonly RunEvaluator[])[]): ParallelGroup {
   const n = branches.length;
+  const isBare = Uint8Array.from(branches, (b) => (b.every(resistanceFree) ? 1 : 0));
   return {
     branches,
+    bare: isBare.reduce((a, b) => a + b, 0),
+    isBare,
     shares: new Float64Array(n).fill(Number.NaN),
     loss: new Float64Array(n),
     slope: new Float64Array(n),
@@ -129,6 +144,13 @@ export function parallelSplit(
   const n = g.branches.length;
   if (total === 0) {
     flows.fill(0, 0, n);
+    g.lastIterations = 0;
+    return 0;
+  }
+  // A branch without resistance (a run of length 0 with no fittings) takes the whole flow at
+  // no loss; several such branches share it equally. (The gradient step needs a slope > 0.)
+  if (g.bare > 0) {
+    for (let i = 0; i < n; i++) flows[i] = g.isBare[i] === 1 ? total / g.bare : 0;
     g.lastIterations = 0;
     return 0;
   }

@@ -9,7 +9,14 @@ import { argumentError, checkPositive } from '../errors';
 import { type FrictionFactorOptions, frictionFactor, HAZEN_WILLIAMS_SI } from '../friction/index';
 import { type FrictionSlope, frictionPolicy, frictionWithSlope } from '../friction/internal';
 import type { Acceleration, Density, Flow } from '../units/index';
-import type { PipeRun, PipeRunInput, RunContext, RunEvaluator, RunLossBreakdown } from './run';
+import type {
+  LossComponent,
+  PipeRun,
+  PipeRunInput,
+  RunContext,
+  RunEvaluator,
+  RunLossBreakdown,
+} from './run';
 
 /**
  * The friction law of one run when it is not the system's Colebrook policy:
@@ -176,7 +183,7 @@ export function runLossSlope(
       out.pipeLoss *= scale;
       out.fittingsLoss *= scale;
       out.componentLoss *= scale;
-      if (q === 0) out.frictionFactor = Number.POSITIVE_INFINITY;
+      if (q === 0) out.frictionFactor = undefined;
     }
     return flow < 0 ? -h : h;
   }
@@ -185,7 +192,7 @@ export function runLossSlope(
     if (out) {
       out.velocity = 0;
       out.reynolds = 0;
-      out.frictionFactor = Number.POSITIVE_INFINITY;
+      out.frictionFactor = undefined;
       out.pipeLoss = 0;
       out.fittingsLoss = 0;
       out.componentLoss = 0;
@@ -253,15 +260,21 @@ function lossAbove(
     const g = ctx.g as Acceleration;
     const dq = q * COMPONENT_STEP;
     for (const c of comps) {
-      componentLoss += c.headLoss(q as Flow, rho, g);
-      componentSlope +=
-        (c.headLoss((q + dq) as Flow, rho, g) - c.headLoss((q - dq) as Flow, rho, g)) / (2 * dq);
+      const h = c.headLoss(q as Flow, rho, g);
+      const up = c.headLoss((q + dq) as Flow, rho, g);
+      const down = c.headLoss((q - dq) as Flow, rho, g);
+      if (typeof h !== 'number' || !Number.isFinite(h)) badComponent(c, h, q);
+      if (!Number.isFinite(up)) badComponent(c, up, q + dq);
+      if (!Number.isFinite(down)) badComponent(c, down, q - dq);
+      componentLoss += h;
+      componentSlope += (up - down) / (2 * dq);
     }
   }
   if (out) {
     out.velocity = v;
     out.reynolds = re;
-    out.frictionFactor = f;
+    // At a flow so small that 64/Re overflows, f has no finite value: reported as absent.
+    out.frictionFactor = f < Number.POSITIVE_INFINITY ? f : undefined;
     out.pipeLoss = pipeLoss;
     out.fittingsLoss = fittingsLoss;
     out.componentLoss = componentLoss;
@@ -272,3 +285,16 @@ function lossAbove(
 
 /** Upper Reynolds number of the laminar regime (2300, as the friction policy). */
 const LAMINAR_LIMIT_RE = 2300;
+
+/** Refuses a loss component that gave no finite head loss. */
+function badComponent(c: LossComponent, h: unknown, flow: number): never {
+  const name = typeof c.name === 'string' ? c.name : 'a component';
+  throw argumentError(
+    'INVALID_ARGUMENT',
+    `${name}.headLoss(${flow})`,
+    h,
+    'm',
+    'a finite head loss',
+    'A loss component must return a finite head loss (m) for every flow.',
+  );
+}

@@ -7,6 +7,15 @@
 import { argumentError, checkFinite, checkNonNegative, checkPositive } from '../errors';
 import type { FrictionFactorOptions } from '../friction/index';
 import type { FrictionPolicy } from '../friction/internal';
+import {
+  guardArray,
+  guardBoolean,
+  guardFunction,
+  guardInteger,
+  guardRecord,
+  guardResult,
+  guardString,
+} from '../guards';
 import { type FittingCount, type FittingSet, fittingSet, kFromCv, kFromKv } from '../losses/index';
 import { type MaterialName, material, type PipeDimensions } from '../pipes/index';
 import type { Acceleration, Density, Flow, Length } from '../units/index';
@@ -68,7 +77,7 @@ export interface PipeRunInput {
 export interface RunLossBreakdown {
   velocity: number;
   reynolds: number;
-  frictionFactor: number;
+  frictionFactor: number | undefined;
   pipeLoss: number;
   fittingsLoss: number;
   componentLoss: number;
@@ -177,14 +186,19 @@ function valveK(valve: ValveCoefficient, diameter: Length, name: string): number
  * ```
  */
 export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRun {
-  const name = input.name ?? `run ${position}`;
+  guardInteger('position', position, 1, 1_000_000);
+  guardBoolean('aged', aged);
+  guardRecord(`runs[${position - 1}]`, input);
+  const name = input.name === undefined ? `run ${position}` : guardString('name', input.name);
   checkNonNegative(`${name}.length`, input.length, 'm');
   let diameter: number;
   if (input.insideDiameter !== undefined) {
     checkPositive(`${name}.insideDiameter`, input.insideDiameter, 'm');
     diameter = input.insideDiameter;
   } else if (input.pipe !== undefined) {
-    diameter = input.pipe.insideDiameter;
+    const pipe = guardRecord(`${name}.pipe`, input.pipe);
+    checkPositive(`${name}.pipe.insideDiameter`, pipe['insideDiameter'] as number, 'm');
+    diameter = pipe['insideDiameter'] as number;
   } else {
     throw argumentError(
       'INVALID_ARGUMENT',
@@ -200,10 +214,24 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
     law === 'darcy-weisbach' || input.roughness !== undefined || input.material !== undefined
       ? roughnessOfLaw(input, name, aged, law)
       : 0;
-  const relativeRoughness = roughness / diameter;
+  const relativeRoughness = guardResult(
+    `${name}.relativeRoughness`,
+    roughness / diameter,
+    'OUT_OF_RANGE',
+  );
   let kSum = 0;
-  for (const [i, v] of (input.valves ?? []).entries()) {
-    kSum += valveK(v, diameter as Length, `${name}.valves[${i}]`);
+  const valves = guardArray(`${name}.valves`, input.valves ?? [], { max: 10_000 });
+  for (const [i, v] of valves.entries()) {
+    const at = `${name}.valves[${i}]`;
+    kSum += valveK(guardRecord(at, v) as ValveCoefficient, diameter as Length, at);
+  }
+  if (input.fittings !== undefined) guardArray(`${name}.fittings`, input.fittings, { max: 10_000 });
+  const components = guardArray(`${name}.components`, input.components ?? [], { max: 10_000 });
+  for (const [i, c] of components.entries()) {
+    guardFunction(
+      `${name}.components[${i}].headLoss`,
+      guardRecord(`${name}.components[${i}]`, c)['headLoss'],
+    );
   }
   if (input.elevationChange !== undefined)
     checkFinite(`${name}.elevationChange`, input.elevationChange, 'm');
@@ -214,7 +242,7 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
     insideDiameter: diameter as Length,
     roughness: roughness as Length,
     relativeRoughness,
-    area: (Math.PI * diameter * diameter) / 4,
+    area: guardResult(`${name}.area`, (Math.PI * diameter * diameter) / 4, 'OUT_OF_RANGE'),
     valveK: kSum,
     elevationChange: input.elevationChange,
     law,
@@ -237,6 +265,8 @@ function roughnessOfLaw(
 }
 
 /** @internal Precomputes a run's fittings for evaluation. */
+/** The error for a component whose headLoss gave no finite number. */
+
 export function runEvaluator(run: PipeRun): RunEvaluator {
   const list = run.input.fittings ?? [];
   return {

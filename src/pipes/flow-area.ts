@@ -3,7 +3,9 @@
  *
  * @module
  */
+
 import { checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import type { Area, Length } from '../units/index';
 
 /**
@@ -20,5 +22,9 @@ import type { Area, Length } from '../units/index';
  */
 export function flowArea(insideDiameter: Length): Area {
   checkPositive('insideDiameter', insideDiameter, 'm');
-  return ((Math.PI * insideDiameter * insideDiameter) / 4) as Area;
+  return guardResult(
+    'flowArea',
+    (Math.PI * insideDiameter * insideDiameter) / 4,
+    'OUT_OF_RANGE',
+  ) as Area;
 }

@@ -1,4 +1,5 @@
 import { argumentError, checkPositive, HeadflowError } from '../errors';
+import { guardArray } from '../guards';
 import { brent } from '../numeric/brent';
 import {
   type Acceleration,
@@ -8,7 +9,7 @@ import {
   type Power,
   STANDARD_GRAVITY,
 } from '../units/index';
-import { fmt, inRange, maximize } from './internal';
+import { fmt, guardPump, inRange, maximize } from './internal';
 import { shareOf } from './pump-curve';
 import type { BestEfficiencyPoint, FlowRange, Pump, PumpShare } from './types';
 
@@ -16,6 +17,8 @@ function checkPumps(pumps: readonly Pump[]): void {
   if (!Array.isArray(pumps) || pumps.length < 1) {
     throw argumentError('INVALID_ARGUMENT', 'pumps', 0, 'pumps', 'at least 1 pump');
   }
+  guardArray('pumps', pumps, { max: 100 });
+  for (const [i, p] of pumps.entries()) guardPump(`pumps[${i}]`, p);
 }
 
 /** Efficiency of a combination from its head and the members' powers (unit density). */
@@ -136,12 +139,43 @@ class Parallel extends Combination {
       min: this.totalFlow(hHigh) as Flow,
       max: this.totalFlow(hLow) as Flow,
     };
+    if (!(this.flowRange.max > this.flowRange.min)) {
+      throw new HeadflowError(
+        'NO_SOLUTION',
+        `these pumps share only the head ${fmt(hHigh)} m in their catalogue data, no range of ` +
+          'flows; they cannot be combined in parallel.',
+        { parameter: 'pumps' },
+      );
+    }
     this.shutoffHead = this.flowRange.min === 0 ? (hHigh as Length) : undefined;
-    this.npshRange = pumps.every((p) => p.npshRange !== undefined) ? this.flowRange : undefined;
+    this.npshRange = this.npshFlows();
+  }
+
+  /**
+   * The total flows at which every member that runs lies inside its own NPSH data: a member
+   * whose NPSH data start above its first catalogue flow bounds the common head from above
+   * (below that head its flow is too small for its data), and each member's last NPSH flow
+   * bounds it from below. Undefined when a member has no NPSH data or the bounds leave no range.
+   */
+  private npshFlows(): FlowRange | undefined {
+    let hTop = this.hHigh;
+    let hBottom = this.hLow;
+    for (const p of this.pumps) {
+      const r = p.npshRange;
+      if (r === undefined) return undefined;
+      if (r.min > p.flowRange.min) hTop = Math.min(hTop, p.head(r.min));
+      if (r.max < p.flowRange.max) hBottom = Math.max(hBottom, p.head(r.max));
+    }
+    if (!(hTop > hBottom)) return undefined;
+    return { min: this.totalFlow(hTop) as Flow, max: this.totalFlow(hBottom) as Flow };
   }
 
   /** Flow of one member at head h (0 above its shut-off head). */
   private memberFlow(p: Pump, h: number): number {
+    // A parallel group inside this one: its flow at h is the sum of its own members' flows,
+    // found directly rather than by inverting its head curve (a root search inside each step
+    // of another made the best efficiency point of nested groups take hundreds of ms).
+    if (p instanceof Parallel) return p.totalFlow(Math.min(p.hHigh, Math.max(p.hLow, h)));
     const { min, max } = p.flowRange;
     const hMin = p.head(min);
     if (h >= hMin) return min;
@@ -186,9 +220,21 @@ class Parallel extends Combination {
   }
 
   npshRequired(flow: Flow): Length {
+    const range = this.npshRange;
+    if (range === undefined) {
+      throw new HeadflowError('OUT_OF_RANGE', 'these pumps have no common NPSH data.', {
+        parameter: 'flow',
+      });
+    }
+    inRange('combined NPSH data', flow, range.min, range.max, 1, 'm3/s');
     let worst = 0;
     for (const [i, s] of this.shares(flow).entries()) {
-      if (s.flow > 0) worst = Math.max(worst, (this.pumps[i] as Pump).npshRequired(s.flow));
+      const p = this.pumps[i] as Pump;
+      const r = p.npshRange as FlowRange;
+      // Within the combined NPSH range each member's flow lies in its own data, up to the
+      // rounding of the root searches at the ends: keep it there.
+      if (s.flow > 0)
+        worst = Math.max(worst, p.npshRequired(Math.min(r.max, Math.max(r.min, s.flow)) as Flow));
     }
     return worst as Length;
   }

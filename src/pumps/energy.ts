@@ -5,6 +5,7 @@ import {
   checkPositive,
   HeadflowError,
 } from '../errors';
+import { guardArray, guardOneOf, guardRecord, guardResult, guardString } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -15,7 +16,7 @@ import {
   type RotationalSpeed,
   STANDARD_GRAVITY,
 } from '../units/index';
-import { fmt } from './internal';
+import { fmt, guardPump, systemHeadOf } from './internal';
 import { speedForFlow } from './speed-for-flow';
 import type { PumpCurve, SystemCurveLike } from './types';
 
@@ -102,21 +103,16 @@ export interface AnnualEnergy {
  * ```
  */
 export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
+  guardRecord('input', input);
   const { pump, system, profile, density } = input;
+  guardPump('pump', pump);
+  const systemHeadOfRow = systemHeadOf('system', system);
   const g = input.g ?? STANDARD_GRAVITY;
   checkPositive('density', density, 'kg/m3');
   checkFraction('motorEfficiency', input.motorEfficiency);
   const drive = input.driveEfficiency ?? 1;
   checkFraction('driveEfficiency', drive);
-  if (input.control !== 'speed' && input.control !== 'throttle') {
-    throw argumentError(
-      'INVALID_ARGUMENT',
-      'control',
-      String(input.control),
-      undefined,
-      "'speed' or 'throttle'",
-    );
-  }
+  guardOneOf('control', input.control, ['speed', 'throttle'] as const);
   if (!pump.hasEfficiency) {
     throw new HeadflowError('INVALID_ARGUMENT', 'energy needs efficiency or power data.', {
       parameter: 'pump',
@@ -131,10 +127,16 @@ export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
       'at least one { flow, hours } row',
     );
   }
-  if (input.price !== undefined) checkNonNegative('price.perKWh', input.price.perKWh);
+  if (input.price !== undefined) {
+    guardRecord('price', input.price);
+    checkNonNegative('price.perKWh', input.price.perKWh);
+    guardString('price.currency', input.price.currency);
+  }
+  guardArray('profile', profile, { max: 100_000 });
   const rows: EnergyRow[] = [];
   let total = 0;
-  profile.forEach((row, i) => {
+  profile.forEach((line, i) => {
+    const row = guardRecord(`profile[${i}]`, line) as unknown as ProfileRow;
     checkNonNegative(`profile[${i}].flow`, row.flow, 'm3/s');
     checkNonNegative(`profile[${i}].hours`, row.hours, 'h');
     if (row.flow === 0) {
@@ -153,7 +155,7 @@ export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
       });
       return;
     }
-    const systemHead = system.head(row.flow);
+    const systemHead = systemHeadOfRow(row.flow) as Length;
     let speed: RotationalSpeed;
     let pumpHead: number;
     let eff: number;
@@ -182,8 +184,12 @@ export function annualEnergy(input: AnnualEnergyInput): AnnualEnergy {
       shaft = s.pump.shaftPower(row.flow, density, g);
     }
     const inputPower = shaft / (input.motorEfficiency * drive);
-    const joules = inputPower * row.hours * 3600;
-    total += joules;
+    const joules = guardResult(
+      `profile[${i}] energy`,
+      inputPower * row.hours * 3600,
+      'OUT_OF_RANGE',
+    );
+    total = guardResult('total energy', total + joules, 'OUT_OF_RANGE');
     rows.push({
       flow: row.flow,
       hours: row.hours,

@@ -5,9 +5,19 @@
  * @module
  */
 import { argumentError, HeadflowError } from '../errors';
+import {
+  guardBoolean,
+  guardFunction,
+  guardInteger,
+  guardNumber,
+  guardOneOf,
+  guardRange,
+  guardRecord,
+} from '../guards';
 import { monotoneCubic } from '../numeric/interpolate';
 import { polynomialLeastSquares } from '../numeric/least-squares';
-import type { CurveFit, FitReport } from './types';
+import type { Flow } from '../units/index';
+import type { CurveFit, FitReport, Pump, SystemCurveLike } from './types';
 
 /** A fitted curve on plain SI numbers. */
 export interface Kernel {
@@ -72,6 +82,8 @@ export function fitKernel(
 ): Kernel {
   const first = xs[0] ?? 0;
   const last = xs[xs.length - 1] ?? 0;
+  guardRecord(`fit.${name}`, spec);
+  guardOneOf(`fit.${name}.method`, spec.method, ['polynomial', 'monotone'] as const);
   if (spec.method === 'monotone') {
     const px = throughOrigin && first > 0 ? [0, ...xs] : [...xs];
     const py = throughOrigin && first > 0 ? [0, ...ys] : [...ys];
@@ -104,6 +116,7 @@ export function fitKernel(
     );
   }
   const low = throughOrigin ? 1 : 0;
+  guardInteger(`fit.${name}.degree`, spec.degree, low, 20);
   const needed = spec.degree - low + 1;
   if (Number.isInteger(spec.degree) && spec.degree >= low && xs.length < needed) {
     throw argumentError(
@@ -273,4 +286,46 @@ export function maximize(f: (x: number) => number, a: number, b: number, grid = 
   evaluations++;
   const gridX = best === grid ? b : a + best * h;
   return vm >= bestV ? { x: xm, value: vm, evaluations } : { x: gridX, value: bestV, evaluations };
+}
+
+/**
+ * Checks the shape of a pump handed to a public function (any object with the {@link Pump}
+ * members, not only those headflow builds): an object, its curve methods functions, its flow
+ * range finite with 0 <= min < max. Returns it typed.
+ * @internal
+ */
+export function guardPump<P extends Pump>(parameter: string, pump: P): P {
+  const p = guardRecord(parameter, pump);
+  for (const m of ['head', 'efficiency', 'npshRequired', 'shaftPower', 'shares'] as const) {
+    guardFunction(`${parameter}.${m}`, p[m]);
+  }
+  guardBoolean(`${parameter}.hasEfficiency`, p['hasEfficiency']);
+  const range = guardRecord(`${parameter}.flowRange`, p['flowRange']);
+  const min = guardRange(`${parameter}.flowRange.min`, range['min'], { min: 0, unit: 'm3/s' });
+  guardRange(`${parameter}.flowRange.max`, range['max'], { min, minOpen: true, unit: 'm3/s' });
+  if (p['npshRange'] !== undefined) guardRecord(`${parameter}.npshRange`, p['npshRange']);
+  return pump;
+}
+
+/**
+ * Checks a system handed to a public function (an object with `head(flow)` and a finite
+ * `staticHead`) and returns its head function, which refuses a result that is not a finite
+ * number (naming the flow) instead of carrying it into a solver.
+ * @internal
+ */
+export function systemHeadOf(parameter: string, system: SystemCurveLike): (flow: Flow) => number {
+  const s = guardRecord(parameter, system);
+  const head = guardFunction<(flow: Flow) => unknown>(`${parameter}.head`, s['head']);
+  guardNumber(`${parameter}.staticHead`, s['staticHead'], 'm');
+  return (flow: Flow): number => {
+    const h = head.call(system, flow);
+    if (typeof h !== 'number' || !Number.isFinite(h)) {
+      throw new HeadflowError(
+        'INVALID_ARGUMENT',
+        `${parameter}.head(${fmt(flow)} m3/s) returned ${typeof h === 'number' ? String(h) : typeof h}, not a finite head.`,
+        { parameter: `${parameter}.head`, allowed: 'a finite head (m)' },
+      );
+    }
+    return h;
+  };
 }

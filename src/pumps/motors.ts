@@ -1,4 +1,5 @@
 import { argumentError, checkNonNegative, checkPositive, HeadflowError } from '../errors';
+import { guardOneOf, guardRecord } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -7,7 +8,7 @@ import {
   STANDARD_GRAVITY,
   UNITS,
 } from '../units/index';
-import { fmt, maximize } from './internal';
+import { fmt, guardPump, maximize } from './internal';
 import type { Pump } from './types';
 
 const HP = UNITS.hp.factor; // W, mechanical horsepower (NIST SP 811)
@@ -107,6 +108,7 @@ export interface MotorRating {
  */
 export function selectMotor(power: Power, options: MotorOptions): MotorRating {
   checkNonNegative('power', power, 'W');
+  guardRecord('options', options);
   const sf = options.serviceFactor ?? 1;
   if (typeof sf !== 'number' || !Number.isFinite(sf) || sf < 1 || sf > 2) {
     throw argumentError(
@@ -119,7 +121,7 @@ export function selectMotor(power: Power, options: MotorOptions): MotorRating {
   }
   const series = options.series;
   if (series !== 'nema' && series !== 'iec') {
-    throw argumentError('INVALID_ARGUMENT', 'series', String(series), undefined, "'nema' or 'iec'");
+    guardOneOf('series', series, ['nema', 'iec'] as const);
   }
   const table = series === 'nema' ? NEMA_MG1_HP_RATINGS : IEC_60072_KW_RATINGS;
   const unitW = series === 'nema' ? HP : 1000;
@@ -187,7 +189,10 @@ export interface MotorForPump {
  * ```
  */
 export function motorForPump(input: MotorForPumpInput): MotorForPump {
+  guardRecord('input', input);
   const { pump, density } = input;
+  guardPump('pump', pump);
+  checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
   const g = input.g ?? STANDARD_GRAVITY;
   checkPositive('density', density, 'kg/m3');
   if (!pump.hasEfficiency) {

@@ -137,6 +137,7 @@ export function npshAvailable(input: NpshAvailableInput | NpshFromGaugeInput): L
     return guardResult(
       'NPSH available',
       (gauge + atmosphere - vaporPressure) / rhoG + z + (v * v) / (2 * g),
+      'OUT_OF_RANGE',
     ) as Length;
   }
   const surface = guardRange('surfacePressure', r['surfacePressure'], {
@@ -205,6 +206,7 @@ export interface NpshMarginResult {
  * ```
  */
 export function npshMargin(input: NpshMarginInput): NpshMarginResult {
+  guardRecord('input', input);
   checkFinite('available', input.available, 'm');
   checkPositive('required', input.required, 'm');
   const ratioRule = input.marginRatio ?? 1.1;
@@ -215,9 +217,13 @@ export function npshMargin(input: NpshMarginInput): NpshMarginResult {
   checkNonNegative('minimumMargin', minimum, 'm');
   const requiredAvailable = Math.max(ratioRule * input.required, input.required + minimum);
   return {
-    ratio: input.available / input.required,
+    ratio: guardResult('ratio', input.available / input.required, 'OUT_OF_RANGE'),
     margin: (input.available - input.required) as Length,
-    requiredAvailable: requiredAvailable as Length,
+    requiredAvailable: guardResult(
+      'requiredAvailable',
+      requiredAvailable,
+      'OUT_OF_RANGE',
+    ) as Length,
     ok: input.available >= requiredAvailable,
   };
 }

@@ -1,4 +1,5 @@
 import { checkPositive, HeadflowError } from '../errors';
+import { guardOptions } from '../guards';
 import { brent } from '../numeric/brent';
 import {
   type Acceleration,
@@ -8,7 +9,7 @@ import {
   type Power,
   STANDARD_GRAVITY,
 } from '../units/index';
-import { fmt } from './internal';
+import { fmt, guardPump, systemHeadOf } from './internal';
 import type { Pump, PumpShare, SystemCurveLike } from './types';
 
 /** Options of {@link operatingPoint}. */
@@ -67,13 +68,17 @@ export interface OperatingPoint {
 export function operatingPoint(
   pump: Pump,
   system: SystemCurveLike,
-  options: OperatingPointOptions = {},
+  options?: OperatingPointOptions | null,
 ): OperatingPoint {
-  const g = options.g ?? STANDARD_GRAVITY;
+  guardPump('pump', pump);
+  const systemHead = systemHeadOf('system', system);
+  const o = guardOptions<OperatingPointOptions>('options', options);
+  const g = (o.g ?? STANDARD_GRAVITY) as Acceleration;
   checkPositive('g', g, 'm/s2');
-  if (options.density !== undefined) checkPositive('density', options.density, 'kg/m3');
+  const density = o.density as Density | undefined;
+  if (density !== undefined) checkPositive('density', density, 'kg/m3');
   const { min, max } = pump.flowRange;
-  const diff = (q: number): number => pump.head(q as Flow) - system.head(q as Flow);
+  const diff = (q: number): number => pump.head(q as Flow) - systemHead(q as Flow);
   const atMin = diff(min);
   const atMax = diff(max);
   if (Number.isNaN(atMin) || Number.isNaN(atMax)) {
@@ -83,7 +88,7 @@ export function operatingPoint(
   }
   if (atMin < 0) {
     const hp = pump.head(min);
-    const hs = system.head(min);
+    const hs = systemHead(min);
     const message =
       min === 0
         ? `the pump cannot reach the static head: shut-off ${fmt(hp)} m < static ${fmt(hs)} m.`
@@ -101,13 +106,13 @@ export function operatingPoint(
       'NO_SOLUTION',
       'No operating point: the system needs more flow than the catalogue covers: the pump runs ' +
         `out past Q_max = ${fmt(max)} m3/s (pump ${fmt(pump.head(max))} m > system ` +
-        `${fmt(system.head(max))} m there).`,
+        `${fmt(systemHead(max))} m there).`,
       { parameter: 'system', value: max, unit: 'm3/s', allowed: `<= ${fmt(max)} m3/s` },
     );
   }
   const r = brent(diff, min, max, { xTolerance: 1e-13 * max });
   const flow = r.root as Flow;
-  return describePoint(pump, flow, options.density, g, r.iterations, r.evaluations);
+  return describePoint(pump, flow, density, g, r.iterations, r.evaluations);
 }
 
 /** The operating-point record of a pump at a known flow. @internal */

@@ -1,4 +1,5 @@
 import { checkFraction, checkNonNegative, checkPositive } from '../errors';
+import { guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -37,7 +38,7 @@ export function hydraulicPower(
   checkNonNegative('head', head, 'm');
   checkPositive('density', density, 'kg/m3');
   checkPositive('g', g, 'm/s2');
-  return (density * g * flow * head) as Power;
+  return guardResult('hydraulicPower', density * g * flow * head, 'OUT_OF_RANGE') as Power;
 }
 
 /** Input of {@link powerChain}. */
@@ -87,6 +88,7 @@ export interface PowerChain {
  * ```
  */
 export function powerChain(input: PowerChainInput): PowerChain {
+  guardRecord('input', input);
   const hydraulic = hydraulicPower(input.flow, input.head, input.density, input.g);
   checkFraction('pumpEfficiency', input.pumpEfficiency);
   const motor = input.motorEfficiency ?? 1;
@@ -95,7 +97,8 @@ export function powerChain(input: PowerChainInput): PowerChain {
   checkFraction('driveEfficiency', drive);
   const shaft = hydraulic / input.pumpEfficiency;
   const motorInput = shaft / motor;
-  const driveInput = motorInput / drive;
+  // An efficiency of 1e-300 is in (0, 1] but leaves the floating-point range here.
+  const driveInput = guardResult('driveInput', motorInput / drive, 'OUT_OF_RANGE');
   return {
     hydraulic,
     shaft: shaft as Power,

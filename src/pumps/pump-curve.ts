@@ -5,6 +5,7 @@
  * @module
  */
 import { argumentError, checkPositive, HeadflowError } from '../errors';
+import { guardArray, guardNumber, guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Density,
@@ -167,7 +168,7 @@ export function pumpCurve(input: PumpCurveInput): PumpCurve {
 }
 
 function buildBase(input: PumpCurveInput): Base {
-  const { points } = input;
+  const { points } = guardRecord('input', input) as unknown as PumpCurveInput;
   checkPositive('speed', input.speed, 'rad/s');
   if (input.impellerDiameter !== undefined) {
     checkPositive('impellerDiameter', input.impellerDiameter, 'm');
@@ -185,6 +186,7 @@ function buildBase(input: PumpCurveInput): Base {
         'to the end of the curve, each with its head and efficiency.',
     );
   }
+  guardArray('points', points, { max: 10_000 });
   const n = points.length;
   const q: number[] = [];
   const h: number[] = [];
@@ -194,7 +196,8 @@ function buildBase(input: PumpCurveInput): Base {
   const pow: number[] = [];
   const npQ: number[] = [];
   const np: number[] = [];
-  points.forEach((p, i) => {
+  points.forEach((point, i) => {
+    const p = guardRecord(`points[${i}]`, point) as unknown as CataloguePoint;
     const flow = p.flow as number;
     const head = p.head as number;
     if (typeof flow !== 'number' || !Number.isFinite(flow) || flow < 0) {
@@ -486,6 +489,7 @@ function buildBase(input: PumpCurveInput): Base {
 }
 
 function checkRegion(name: string, r: readonly [number, number]): readonly [number, number] {
+  guardArray(name, r, { min: 2, max: 2 });
   const [lo, hi] = r;
   if (
     typeof lo !== 'number' ||
@@ -498,7 +502,7 @@ function checkRegion(name: string, r: readonly [number, number]): readonly [numb
     throw argumentError(
       'INVALID_ARGUMENT',
       name,
-      `[${String(lo)}, ${String(hi)}]`,
+      typeof lo === 'number' && typeof hi === 'number' ? `[${lo}, ${hi}]` : 'not two numbers',
       undefined,
       '[low, high] fractions of BEP flow with 0 <= low < high',
     );
@@ -567,9 +571,22 @@ class ScaledCurve implements PumpCurve {
       this.allowableRegion = { min: (a[0] * qb) as Flow, max: (a[1] * qb) as Flow };
     }
     this.fits = base.fits;
+    // A speed or diameter so far from the catalogue's that the scaled curve leaves the range
+    // of floating-point numbers (head r^2 overflowing, flows rounding to zero) is refused.
+    const top = base.head.evaluate(base.xMin) * this.hs;
+    if (!(this.hs > 0 && base.xMax * this.qs > 0)) {
+      throw new HeadflowError(
+        'OUT_OF_RANGE',
+        `the speed or impeller ratio ${rs * rd} scales the catalogue curve to nothing.`,
+        { parameter: 'speed', value: rs * rd, allowed: 'a ratio the curve can be scaled by' },
+      );
+    }
+    guardResult('scaled head', top, 'OUT_OF_RANGE');
+    guardResult('scaled flow', base.xMax * this.qs, 'OUT_OF_RANGE');
   }
 
   private x(flow: number): number {
+    if (typeof flow !== 'number') guardNumber('flow', flow, 'm3/s');
     return inRange('catalogue', flow / this.qs, this.base.xMin, this.base.xMax, this.qs, 'm3/s');
   }
 
@@ -596,6 +613,7 @@ class ScaledCurve implements PumpCurve {
   npshRequired(flow: Flow): Length {
     const k = this.base.npsh;
     if (k === undefined) throw noData('NPSH required');
+    if (typeof flow !== 'number') guardNumber('flow', flow, 'm3/s');
     const x = inRange('NPSH-required', flow / this.rs, k.xMin, k.xMax, this.rs, 'm3/s');
     return (k.evaluate(x) * this.rs * this.rs) as Length;
   }
@@ -618,7 +636,7 @@ class ScaledCurve implements PumpCurve {
       // Limit at zero flow: efficiency ~ eta'(0) x, so P -> rho g H(0) / eta'(0).
       p0 = (density * g * head.evaluate(x)) / efficiency.derivative(x);
     }
-    return (p0 * cube) as Power;
+    return guardResult('shaftPower', p0 * cube, 'OUT_OF_RANGE') as Power;
   }
 
   shares(flow: Flow): readonly PumpShare[] {

@@ -1,4 +1,5 @@
-import { argumentError, checkPositive } from '../errors';
+import { checkPositive } from '../errors';
+import { guardOneOf, guardResult } from '../guards';
 import { type Flow, type Length, type RotationalSpeed, UNITS } from '../units/index';
 
 /** Unit system of a specific speed: SI (rpm, m3/s, m) or US customary (rpm, gal/min, ft). */
@@ -16,9 +17,7 @@ const FOOT = UNITS.ft.factor; // m, exact
 export const SPECIFIC_SPEED_US_PER_SI: number = (1 / GPM) ** 0.5 * FOOT ** 0.75;
 
 function check(units: SpecificSpeedUnits): void {
-  if (units !== 'si' && units !== 'us') {
-    throw argumentError('INVALID_ARGUMENT', 'units', String(units), undefined, "'si' or 'us'");
-  }
+  guardOneOf('units', units, ['si', 'us'] as const);
 }
 
 /**
@@ -94,7 +93,9 @@ export function suctionSpecificSpeed(
 /** `N Q^0.5 / H^0.75` with N in rpm and Q, H in SI (m3/s, m) or US (gal/min, ft) units. */
 function speedNumber(speed: number, flow: number, head: number, units: SpecificSpeedUnits): number {
   const n = speed / RPM;
-  return units === 'si'
-    ? (n * Math.sqrt(flow)) / head ** 0.75
-    : (n * Math.sqrt(flow / GPM)) / (head / FOOT) ** 0.75;
+  const value =
+    units === 'si'
+      ? (n * Math.sqrt(flow)) / head ** 0.75
+      : (n * Math.sqrt(flow / GPM)) / (head / FOOT) ** 0.75;
+  return guardResult('specific speed', value, 'OUT_OF_RANGE');
 }

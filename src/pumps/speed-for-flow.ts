@@ -1,7 +1,8 @@
 import { argumentError, checkPositive, HeadflowError } from '../errors';
+import { guardFunction, guardOptions, guardRange } from '../guards';
 import { brent } from '../numeric/brent';
 import type { Flow, Length, RotationalSpeed } from '../units/index';
-import { fmt } from './internal';
+import { fmt, guardPump, systemHeadOf } from './internal';
 import type { PumpCurve, SystemCurveLike } from './types';
 
 /** Options of {@link speedForFlow}. */
@@ -53,15 +54,20 @@ export function speedForFlow(
   pump: PumpCurve,
   system: SystemCurveLike,
   flow: Flow,
-  options: SpeedForFlowOptions = {},
+  options?: SpeedForFlowOptions | null,
 ): SpeedForFlowResult {
+  guardPump('pump', pump);
+  guardFunction('pump.atSpeed', (pump as unknown as Record<string, unknown>)['atSpeed']);
+  guardRange('pump.speed', pump.speed, { min: 0, minOpen: true, unit: 'rad/s' });
+  const systemHead = systemHeadOf('system', system);
+  const o = guardOptions<SpeedForFlowOptions>('options', options);
   if (typeof flow !== 'number' || !Number.isFinite(flow) || flow <= 0) {
     throw argumentError('INVALID_ARGUMENT', 'flow', flow, 'm3/s', 'a finite flow > 0');
   }
   const n0 = pump.speed;
-  const maxSpeed = options.maxSpeed ?? n0;
+  const maxSpeed = (o.maxSpeed ?? n0) as RotationalSpeed;
   checkPositive('maxSpeed', maxSpeed, 'rad/s');
-  const need = system.head(flow);
+  const need = systemHead(flow) as Length;
   if (Number.isNaN(need)) {
     throw new HeadflowError('INVALID_ARGUMENT', 'the system head is NaN at the required flow.', {
       parameter: 'system',

@@ -7,6 +7,7 @@
 import type { DesignReport, SampledCurve, UnitSystem } from '../design/core';
 import { displayUnits } from '../design/core';
 import { argumentError } from '../errors';
+import { guardOptions } from '../guards';
 import type { ChartSeries, ChartSpec } from './chart-spec';
 import { chosenUnits } from './format-values';
 
@@ -17,7 +18,9 @@ export interface ChartFromReportOptions {
 }
 
 function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
-  return curves.map((c, i) => {
+  // A curve is drawn through two samples or more: one with fewer (a candidate whose curve
+  // could not be sampled) is left out of the chart rather than making the chart fail.
+  return curves.flatMap((c, i) => {
     if (c.flows.length !== c.values.length) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -27,14 +30,20 @@ function series(path: string, curves: readonly SampledCurve[]): ChartSeries[] {
         'as many values as flows',
       );
     }
-    const points = c.flows.map((flow, k) => ({ flow, value: Number(c.values[k]) }));
-    return {
-      name: c.name,
-      ...(c.group === undefined ? {} : { group: c.group }),
-      ...(c.speed === undefined ? {} : { speed: c.speed }),
-      ...(c.maxSpeed === undefined ? {} : { maxSpeed: c.maxSpeed }),
-      points,
-    };
+    // Samples without a finite flow and value (where a curve has no value) are not drawn.
+    const points = c.flows
+      .map((flow, k) => ({ flow, value: Number(c.values[k]) }))
+      .filter((p) => Number.isFinite(p.flow) && Number.isFinite(p.value));
+    if (points.length < 2) return [];
+    return [
+      {
+        name: c.name,
+        ...(c.group === undefined ? {} : { group: c.group }),
+        ...(c.speed === undefined ? {} : { speed: c.speed }),
+        ...(c.maxSpeed === undefined ? {} : { maxSpeed: c.maxSpeed }),
+        points,
+      },
+    ];
   });
 }
 
@@ -69,9 +78,10 @@ function groupOf(report: DesignReport, candidate: string): string {
  */
 export function chartSpecFromReport(
   report: DesignReport,
-  options: ChartFromReportOptions = {},
+  options?: ChartFromReportOptions | null,
 ): ChartSpec {
-  const u = displayUnits(chosenUnits(report, options.units));
+  const o = guardOptions<ChartFromReportOptions>('options', options);
+  const u = displayUnits(chosenUnits(report, o.units as UnitSystem | undefined));
   const c = report.curves;
   if (c === undefined) {
     throw argumentError(
@@ -87,19 +97,25 @@ export function chartSpecFromReport(
     units: { flow: u.flow, head: u.head },
     pumpCurves: series('curves.pumps', c.pumps),
     systemCurves: series('curves.systems', c.systems),
-    operatingPoints: c.points.map((p) => ({
-      name: p.name,
-      flow: p.flow,
-      head: p.head,
-      ...(p.candidate === undefined ? {} : { group: groupOf(report, p.candidate) }),
-    })),
-    dutyPoints: (c.dutyPoints ?? []).map((d) => ({ name: d.case, flow: d.flow, head: d.head })),
-    preferredRegions: c.preferredRegions.map((r) => ({
-      name: r.name,
-      minFlow: r.minFlow,
-      maxFlow: r.maxFlow,
-      ...(r.group === undefined ? {} : { group: r.group }),
-    })),
+    operatingPoints: c.points
+      .filter((p) => Number.isFinite(p.flow) && Number.isFinite(p.head))
+      .map((p) => ({
+        name: p.name,
+        flow: p.flow,
+        head: p.head,
+        ...(p.candidate === undefined ? {} : { group: groupOf(report, p.candidate) }),
+      })),
+    dutyPoints: (c.dutyPoints ?? [])
+      .filter((d) => Number.isFinite(d.flow) && Number.isFinite(d.head))
+      .map((d) => ({ name: d.case, flow: d.flow, head: d.head })),
+    preferredRegions: c.preferredRegions
+      .filter((r) => Number.isFinite(r.minFlow) && Number.isFinite(r.maxFlow))
+      .map((r) => ({
+        name: r.name,
+        minFlow: r.minFlow,
+        maxFlow: r.maxFlow,
+        ...(r.group === undefined ? {} : { group: r.group }),
+      })),
     efficiencyCurves: series('curves.efficiency', c.efficiency),
     npshRequired: series('curves.npshRequired', c.npshRequired),
     npshAvailable: series('curves.npshAvailable', c.npshAvailable),

@@ -102,8 +102,8 @@ export interface ChartSpec {
 
 /** Size of the drawing. */
 export interface ChartOptions {
-  /** Width in px (the SVG user unit), > 0. Default 800. */
+  /** Width in px (the SVG user unit), 100 to 20000. Default 800. */
   readonly width?: number;
-  /** Height in px, > 0. Default 600. */
+  /** Height in px, 100 to 20000. Default 600. */
   readonly height?: number;
 }

@@ -6,15 +6,15 @@
  * @module
  * @internal
  */
-import {
-  argumentError,
-  checkFinite,
-  checkNonNegative,
-  checkPositive,
-  HeadflowError,
-} from '../errors';
+import { argumentError, checkFinite, checkNonNegative, HeadflowError } from '../errors';
+import { guardArray, guardRange, guardRecord, guardString, kindOf } from '../guards';
 import { isUnit, UNITS } from '../units/index';
 import type { ChartBand, ChartMarker, ChartOptions, ChartSeries, ChartSpec } from './chart-spec';
+
+/** Smallest width and height of a chart, px. */
+export const MIN_SIZE = 100;
+/** Largest width and height of a chart, px. */
+export const MAX_SIZE = 20_000;
 
 /** What a series' `value` means, for its checks and the unit in messages. */
 export type SeriesKind = 'head' | 'efficiency' | 'npsh' | 'npshAvailable';
@@ -29,13 +29,14 @@ function checkList(path: string, list: unknown): asserts list is readonly unknow
   if (!Array.isArray(list)) {
     throw argumentError('INVALID_ARGUMENT', path, list, undefined, 'an array');
   }
+  guardArray(path, list, { max: 100_000 });
 }
 
 function checkUnit(path: string, unit: unknown, dimension: 'flow' | 'length'): void {
   if (!isUnit(unit)) {
     throw new HeadflowError(
       'UNKNOWN_UNIT',
-      `${path} ${typeof unit === 'string' ? JSON.stringify(unit) : String(unit)} is not a known unit.`,
+      `${path} ${typeof unit === 'string' ? JSON.stringify(unit) : kindOf(unit)} is not a known unit.`,
       { parameter: path, value: unit, allowed: `a unit of ${dimension} from the catalogue` },
     );
   }
@@ -49,8 +50,11 @@ function checkUnit(path: string, unit: unknown, dimension: 'flow' | 'length'): v
 }
 
 function checkSeries(path: string, series: ChartSeries, kind: SeriesKind): void {
+  guardRecord(path, series);
   checkName(`${path}.name`, series.name);
+  if (series.group !== undefined) guardString(`${path}.group`, series.group, 10_000);
   checkList(`${path}.points`, series.points);
+  guardArray(`${path}.points`, series.points, { max: 1_000_000 });
   if (series.points.length < 2) {
     throw argumentError(
       'INVALID_ARGUMENT',
@@ -63,6 +67,7 @@ function checkSeries(path: string, series: ChartSeries, kind: SeriesKind): void 
   }
   series.points.forEach((p, i) => {
     const at = `${path}.points[${i}]`;
+    guardRecord(at, p);
     checkNonNegative(`${at}.flow`, p.flow, 'm3/s');
     if (kind === 'efficiency') {
       if (typeof p.value !== 'number' || !Number.isFinite(p.value) || p.value < 0 || p.value > 1) {
@@ -74,19 +79,21 @@ function checkSeries(path: string, series: ChartSeries, kind: SeriesKind): void 
           '0 <= value <= 1',
         );
       }
-    } else if (kind === 'npsh') checkNonNegative(`${at}.value`, p.value, 'm');
-    else checkFinite(`${at}.value`, p.value, 'm');
+    } else checkFinite(`${at}.value`, p.value, 'm');
   });
 }
 
 function checkMarker(path: string, m: ChartMarker): void {
+  guardRecord(path, m);
   checkName(`${path}.name`, m.name);
   checkNonNegative(`${path}.flow`, m.flow, 'm3/s');
   checkFinite(`${path}.head`, m.head, 'm');
 }
 
 function checkBand(path: string, b: ChartBand): void {
+  guardRecord(path, b);
   checkName(`${path}.name`, b.name);
+  if (b.group !== undefined) guardString(`${path}.group`, b.group, 10_000);
   checkNonNegative(`${path}.minFlow`, b.minFlow, 'm3/s');
   checkNonNegative(`${path}.maxFlow`, b.maxFlow, 'm3/s');
   if (b.maxFlow < b.minFlow) {
@@ -108,11 +115,18 @@ export function validateChart(spec: ChartSpec, options: ChartOptions): void {
   if (typeof spec !== 'object' || spec === null) {
     throw argumentError('INVALID_ARGUMENT', 'spec', spec, undefined, 'a ChartSpec object');
   }
-  if (options.width !== undefined) checkPositive('options.width', options.width, 'px');
-  if (options.height !== undefined) checkPositive('options.height', options.height, 'px');
+  // Stated bounds: a drawing from 100 to 20000 px a side (a huge size made the layout loop
+  // for seconds and a size of 1e21 px broke number formatting).
+  if (options.width !== undefined) {
+    guardRange('options.width', options.width, { min: MIN_SIZE, max: MAX_SIZE, unit: 'px' });
+  }
+  if (options.height !== undefined) {
+    guardRange('options.height', options.height, { min: MIN_SIZE, max: MAX_SIZE, unit: 'px' });
+  }
   if (typeof spec.title !== 'string') {
     throw argumentError('INVALID_ARGUMENT', 'title', spec.title, undefined, 'a string');
   }
+  if (typeof spec.title === 'string') guardString('title', spec.title, 10_000);
   if (typeof spec.units !== 'object' || spec.units === null) {
     throw argumentError('INVALID_ARGUMENT', 'units', spec.units, undefined, '{ flow, head }');
   }

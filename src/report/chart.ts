@@ -8,6 +8,7 @@
 import { type ScaleLinear, scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { symbol } from '../design/say';
+import { guardOptions } from '../guards';
 import { type Flow, type Length, type RotationalSpeed, to } from '../units/index';
 import type { ChartMarker, ChartOptions, ChartPoint, ChartSeries, ChartSpec } from './chart-spec';
 import { type Box, inside, overlaps, placeNear, textBox, textWidth, wrapText } from './chart-text';
@@ -129,9 +130,9 @@ function rpm(speed: number): string {
  * @param options - `width` (default 800) and `height` (default 600; the least height) in px
  * @returns the SVG document, starting with an XML declaration
  * @throws HeadflowError `INVALID_ARGUMENT` naming the path of the value (for example
- *   `pumpCurves[1].points[3].value`) for a non-finite number, a negative flow or NPSH required,
+ *   `pumpCurves[1].points[3].value`) for a non-finite number, a negative flow,
  *   an efficiency outside 0..1, a band with `maxFlow < minFlow`, a series with fewer than 2
- *   points, a spec without any curve, or a width or height that is not > 0; `UNKNOWN_UNIT` or
+ *   points, a spec without any curve, or a width or height outside 100 to 20000 px; `UNKNOWN_UNIT` or
  *   `WRONG_DIMENSION` for `units.flow` / `units.head`.
  * @example
  * ```ts
@@ -148,10 +149,11 @@ function rpm(speed: number): string {
  * svg.startsWith('<?xml'); // true; axes "Flow (L/s)" 0 to 30 and "Head (m)" 0 to 40
  * ```
  */
-export function renderChart(spec: ChartSpec, options: ChartOptions = {}): string {
-  validateChart(spec, options);
-  const width = options.width ?? 800;
-  const minHeight = options.height ?? 600;
+export function renderChart(spec: ChartSpec, options?: ChartOptions | null): string {
+  const o = guardOptions<ChartOptions>('options', options) as ChartOptions;
+  validateChart(spec, o);
+  const width = o.width ?? 800;
+  const minHeight = o.height ?? 600;
   const fu = spec.units.flow;
   const hu = spec.units.head;
   const fuText = symbol(fu, 'unicode');

@@ -7,8 +7,9 @@
  * @internal
  */
 import type { DesignReport, UnitSystem } from '../design/core';
-import { argumentError } from '../errors';
+import { guardOneOf } from '../guards';
 import { type Dimension, type Quantity, to, type UnitOf } from '../units/index';
+import { checkReportShape } from './report-shape';
 
 /** What a missing value prints as. */
 export const DASH = '-';
@@ -98,12 +99,7 @@ export function oneLine(text: string): string {
 
 /** Checks the unit system option and picks the report's own when there is none. */
 export function chosenUnits(report: DesignReport, units: UnitSystem | undefined): UnitSystem {
-  if (typeof report !== 'object' || report === null) {
-    throw argumentError('INVALID_ARGUMENT', 'report', report, undefined, 'a DesignReport');
-  }
-  const system = units ?? report.units ?? 'si';
-  if (system !== 'si' && system !== 'us') {
-    throw argumentError('INVALID_ARGUMENT', 'options.units', system, undefined, "'si' or 'us'");
-  }
-  return system;
+  checkReportShape(report);
+  if (units !== undefined) return guardOneOf('options.units', units, ['si', 'us'] as const);
+  return guardOneOf('report.units', report.units ?? 'si', ['si', 'us'] as const);
 }

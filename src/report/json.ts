@@ -18,6 +18,8 @@ import type {
 } from '../design/core';
 import { checkMessage, displayUnits } from '../design/core';
 import { moreUnits } from '../design/say';
+import { HeadflowError } from '../errors';
+import { guardOptions } from '../guards';
 import type { FitReport, MotorRating } from '../pumps/index';
 import type { RunDetails } from '../system/index';
 import {
@@ -551,7 +553,7 @@ function runInput(r: RunInputSummary, system: UnitSystem): Readonly<Record<strin
 export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnvelope {
   const system = chosenUnits(report, units);
   const u = displayUnits(system);
-  return {
+  return finiteOnly({
     format: REPORT_FORMAT,
     units: { ...u, energy: 'kWh' },
     report: {
@@ -580,7 +582,31 @@ export function reportToPlain(report: DesignReport, units?: UnitSystem): JsonEnv
       },
       curves: curves(report, u),
     },
-  };
+  });
+}
+
+/**
+ * Passes the envelope through when every number in it is finite. Missing values are already
+ * `null`; a number that is not finite here came from a field the report must fill (a count, a
+ * rank, a value copied as it is) and is refused, naming where it would have gone.
+ */
+function finiteOnly(envelope: JsonEnvelope): JsonEnvelope {
+  const stack: [unknown, string][] = [[envelope.report, 'report']];
+  while (stack.length > 0) {
+    const [x, path] = stack.pop() as [unknown, string];
+    if (typeof x === 'number' && !Number.isFinite(x)) {
+      throw new HeadflowError(
+        'INVALID_ARGUMENT',
+        `the report holds ${String(x)} where a finite number is required (${path}).`,
+        { parameter: path, value: x, allowed: 'a finite number' },
+      );
+    }
+    if (typeof x === 'object' && x !== null) {
+      for (const [k, v] of Object.entries(x))
+        stack.push([v, Array.isArray(x) ? `${path}[${k}]` : `${path}.${k}`]);
+    }
+  }
+  return envelope;
 }
 
 /** Options of {@link renderJson}. */
@@ -618,6 +644,7 @@ export interface JsonOptions {
  * doc.report.dutyFlow; // { value: 105, unit: 'm3/h' }
  * ```
  */
-export function renderJson(report: DesignReport, options: JsonOptions = {}): string {
-  return `${JSON.stringify(reportToPlain(report, options.units), null, 2)}\n`;
+export function renderJson(report: DesignReport, options?: JsonOptions | null): string {
+  const o = guardOptions<JsonOptions>('options', options);
+  return `${JSON.stringify(reportToPlain(report, o.units as UnitSystem | undefined), null, 2)}\n`;
 }

@@ -5,7 +5,7 @@
  * @module
  */
 import type { DesignReport, UnitSystem } from '../design/core';
-import { guardBoolean } from '../guards';
+import { guardBoolean, guardOptions } from '../guards';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits } from './format-values';
 
@@ -88,10 +88,10 @@ function blockLines(block: Block): string[] {
  * md.split('\n')[0]; // '# Pump selection report: process cooling loop'
  * ```
  */
-export function renderMarkdown(report: DesignReport, options: MarkdownOptions = {}): string {
-  const system = chosenUnits(report, options.units);
-  const summary =
-    options.summary === undefined ? false : guardBoolean('options.summary', options.summary);
+export function renderMarkdown(report: DesignReport, options?: MarkdownOptions | null): string {
+  const o = guardOptions<MarkdownOptions>('options', options);
+  const system = chosenUnits(report, o.units as UnitSystem | undefined);
+  const summary = o.summary === undefined ? false : guardBoolean('options.summary', o.summary);
   const chunks = reportBlocks(report, system, { style: 'unicode', summary }).map((b) =>
     blockLines(b).join('\n'),
   );

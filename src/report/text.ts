@@ -5,8 +5,7 @@
  * @module
  */
 import type { DesignReport, UnitSystem } from '../design/core';
-import { argumentError } from '../errors';
-import { guardBoolean } from '../guards';
+import { guardBoolean, guardInteger, guardOptions } from '../guards';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits, oneLine } from './format-values';
 
@@ -14,7 +13,7 @@ import { chosenUnits, oneLine } from './format-values';
 export interface TextOptions {
   /** Units to print in; default the report's own (`report.units`). */
   readonly units?: UnitSystem;
-  /** Longest line, in characters: an integer >= 40 (default 100). */
+  /** Longest line, in characters: an integer from 40 to 10000 (default 100). */
   readonly width?: number;
   /**
    * The short form (verdict, duty, candidates, ranking, checks, cautions) instead of the full
@@ -27,12 +26,16 @@ export interface TextOptions {
 const DEFAULT_WIDTH = 100;
 /** Narrowest width accepted. */
 const MIN_WIDTH = 40;
+/** Widest width accepted (no terminal or log line is wider). */
+const MAX_WIDTH = 10_000;
 /** Spaces between table columns. */
 const GAP = '  ';
 
 /** Splits text into lines of at most `width` characters at spaces; a longer word is cut. */
 function wrap(text: string, width: number): string[] {
-  const room = Math.max(1, width);
+  // A width that is not a whole number >= 1 (NaN from a column of missing cells) would never
+  // consume the word below: the loop must always advance, so the room is at least 1.
+  const room = Number.isFinite(width) && width >= 1 ? Math.floor(width) : 1;
   const lines: string[] = [];
   let line = '';
   for (const whole of oneLine(text).split(' ')) {
@@ -202,8 +205,9 @@ function blockLines(block: Block, width: number): string[] {
  * @param report - a report from `evaluateDesign`
  * @param options - `units` (`'si'` or `'us'`, default `report.units`) and `width`
  * @returns the text, lines separated by `\n`, ending with a newline
- * @throws HeadflowError `INVALID_ARGUMENT` for a width that is not an integer >= 40 or units
- *   other than `'si'` and `'us'`.
+ * @throws HeadflowError `INVALID_ARGUMENT` for a width that is not an integer from 40 to
+ *   10000, units other than `'si'` and `'us'`, or a report whose parts have the wrong shape
+ *   (a list with a hole, a name that is not a string).
  * @example
  * ```ts
  * // report = evaluateDesign(design) of docs/examples/cooling-loop.ts
@@ -211,20 +215,14 @@ function blockLines(block: Block, width: number): string[] {
  * text.split('\n')[0]; // 'Pump selection report: process cooling loop'
  * ```
  */
-export function renderText(report: DesignReport, options: TextOptions = {}): string {
-  const system = chosenUnits(report, options.units);
-  const width = options.width ?? DEFAULT_WIDTH;
-  if (!Number.isInteger(width) || width < MIN_WIDTH) {
-    throw argumentError(
-      'INVALID_ARGUMENT',
-      'options.width',
-      width,
-      'characters',
-      `an integer >= ${MIN_WIDTH}`,
-    );
-  }
-  const summary =
-    options.summary === undefined ? false : guardBoolean('options.summary', options.summary);
+export function renderText(report: DesignReport, options?: TextOptions | null): string {
+  const o = guardOptions<TextOptions>('options', options);
+  const system = chosenUnits(report, o.units as UnitSystem | undefined);
+  const width =
+    o.width === undefined
+      ? DEFAULT_WIDTH
+      : guardInteger('options.width', o.width, MIN_WIDTH, MAX_WIDTH);
+  const summary = o.summary === undefined ? false : guardBoolean('options.summary', o.summary);
   const blocks = reportBlocks(report, system, { style: 'ascii', summary }).map((b) =>
     blockLines(b, width)
       .map((l) => l.trimEnd())

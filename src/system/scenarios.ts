@@ -7,6 +7,14 @@
 import { argumentError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import type { FrictionFactorOptions } from '../friction/index';
+import {
+  guardArray,
+  guardBoolean,
+  guardFunction,
+  guardNumber,
+  guardRecord,
+  guardString,
+} from '../guards';
 import type { Flow } from '../units/index';
 import {
   type Endpoint,
@@ -39,18 +47,50 @@ export interface ScenarioCurve {
  * The definition of one operating case: the base with the case's changes applied.
  * @throws HeadflowError as {@link systemCurve} does for the resulting definition.
  */
-export function applyCase(base: SystemDefinition, operatingCase: OperatingCase): SystemDefinition {
+/** An end of the line with a case's changes over the base, known fields only. */
+function endpoint(
+  base: Endpoint,
+  change: Partial<Endpoint> | undefined,
+  parameter: string,
+): Endpoint {
+  const b = guardRecord(parameter, base) as Partial<Endpoint>;
+  const c = change ?? {};
+  const velocityDiameter = c.velocityDiameter ?? b.velocityDiameter;
   return {
-    ...base,
+    elevation: (c.elevation ?? b.elevation) as Endpoint['elevation'],
+    pressure: (c.pressure ?? b.pressure) as Endpoint['pressure'],
+    ...(velocityDiameter === undefined ? {} : { velocityDiameter }),
+  };
+}
+
+export function applyCase(base: SystemDefinition, operatingCase: OperatingCase): SystemDefinition {
+  guardRecord('base', base);
+  guardRecord('operatingCase', operatingCase);
+  guardString('operatingCase.name', operatingCase.name);
+  if (operatingCase.suction !== undefined)
+    guardRecord('operatingCase.suction', operatingCase.suction);
+  if (operatingCase.discharge !== undefined) {
+    guardRecord('operatingCase.discharge', operatingCase.discharge);
+  }
+  if (operatingCase.aged !== undefined) guardBoolean('operatingCase.aged', operatingCase.aged);
+  const merged = {
+    // Only the fields a definition has are copied: unknown keys of the caller's objects
+    // (`__proto__` in parsed JSON, say) are left behind.
+    runs: base.runs,
+    ...(base.g === undefined ? {} : { g: base.g }),
     name: operatingCase.name,
     fluid: operatingCase.fluid ?? base.fluid,
-    suction: { ...base.suction, ...operatingCase.suction },
-    discharge: { ...base.discharge, ...operatingCase.discharge },
+    suction: endpoint(base.suction, operatingCase.suction, 'base.suction'),
+    discharge: endpoint(base.discharge, operatingCase.discharge, 'base.discharge'),
     aged: operatingCase.aged ?? base.aged ?? false,
     ...(operatingCase.friction !== undefined || base.friction !== undefined
       ? { friction: operatingCase.friction ?? base.friction }
       : {}),
   } as SystemDefinition;
+  // The merged definition is checked as a system would check it, so that no case hands on
+  // a definition that cannot make a curve.
+  systemCurve(merged);
+  return merged;
 }
 
 /**
@@ -72,12 +112,15 @@ export function systemScenarios(
   base: SystemDefinition,
   cases: readonly OperatingCase[],
 ): readonly ScenarioCurve[] {
+  guardRecord('base', base);
+  guardArray('cases', cases, { max: 1000 });
   if (cases.length === 0) {
     const name = base.name ?? 'design';
     return [{ name, operatingCase: { name }, curve: systemCurve(base) }];
   }
   const seen = new Set<string>();
   return cases.map((c, i) => {
+    guardRecord(`cases[${i}]`, c);
     if (typeof c.name !== 'string' || c.name.trim() === '' || seen.has(c.name)) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -103,5 +146,12 @@ export function systemScenarios(
  * ```
  */
 export function dutyFor(system: SystemCurve, flow: Flow): SystemPoint {
-  return system.details(flow);
+  const details = guardFunction<SystemCurve['details']>(
+    'system.details',
+    guardRecord('system', system)['details'],
+  );
+  const point = details.call(system, flow);
+  // A system made elsewhere (any object with a details method) must answer with a point.
+  guardNumber('system.details(flow).head', guardRecord('system.details(flow)', point)['head'], 'm');
+  return point;
 }

@@ -6,7 +6,16 @@
  */
 import { argumentError, checkFinite, checkPositive, HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
-import type { FrictionFactorOptions } from '../friction/index';
+import { type FrictionFactorOptions, frictionFactor } from '../friction/index';
+import {
+  guardArray,
+  guardBoolean,
+  guardBuffer,
+  guardRange,
+  guardRecord,
+  guardResult,
+  guardString,
+} from '../guards';
 import { type PipeRun, type PipeRunInput, pipeRun } from '../network/index';
 import {
   checkRunRoughness,
@@ -88,7 +97,8 @@ export interface RunDetails {
   readonly velocity: Velocity;
   readonly reynolds: number;
   readonly regime: 'none' | 'laminar' | 'transition' | 'turbulent';
-  readonly frictionFactor: number;
+  /** Darcy friction factor; `undefined` at zero flow, where it has no value. */
+  readonly frictionFactor: number | undefined;
   /** The run's friction law: the friction policy, a stated factor, or Hazen-Williams. */
   readonly law: PipeRun['law'];
   /** The stated friction factor or Hazen-Williams C (undefined for the policy). */
@@ -160,6 +170,7 @@ function endpointVelocity(e: Endpoint, flow: number): number {
 }
 
 function checkEndpoint(e: Endpoint, name: string): void {
+  guardRecord(name, e);
   checkFinite(`${name}.elevation`, e.elevation, 'm');
   if (!Number.isFinite(e.pressure) || e.pressure < 0) {
     throw argumentError(
@@ -177,6 +188,9 @@ function checkEndpoint(e: Endpoint, name: string): void {
 function checkFluid(fluid: FluidState, suction: Endpoint): void {
   checkPositive('fluid.density', fluid.density, 'kg/m3');
   checkPositive('fluid.kinematicViscosity', fluid.kinematicViscosity, 'm2/s');
+  if (fluid.vaporPressure !== undefined) {
+    guardRange('fluid.vaporPressure', fluid.vaporPressure, { min: 0, unit: 'Pa' });
+  }
   if (fluid.vaporPressure !== undefined && fluid.vaporPressure >= suction.pressure) {
     throw new HeadflowError(
       'OUT_OF_RANGE',
@@ -230,12 +244,15 @@ function checkFluid(fluid: FluidState, suction: Endpoint): void {
  * ```
  */
 export function systemCurve(definition: SystemDefinition): SystemCurve {
+  checkDefinition(definition);
   const { fluid, suction, discharge } = definition;
   checkEndpoint(suction, 'suction');
   checkEndpoint(discharge, 'discharge');
-  checkFluid(fluid, suction);
+  checkFluid(guardRecord('fluid', fluid) as unknown as FluidState, suction);
   const g = definition.g ?? STANDARD_GRAVITY;
   checkPositive('g', g, 'm/s2');
+  // The friction policy is checked once here rather than at the first evaluation.
+  if (definition.friction !== undefined) frictionFactor(1e5, 0, definition.friction);
   if (definition.runs.length === 0) {
     throw argumentError('INVALID_ARGUMENT', 'runs', 0, 'runs', 'at least one run');
   }
@@ -253,7 +270,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
       for (const b of el.group.branches)
         for (const ev of b) checkRunRoughness(ev.run, definition.friction);
   }
-  const rhoG = fluid.density * g;
+  const rhoG = guardResult('fluid.density x g', fluid.density * g, 'OUT_OF_RANGE');
   const staticHead =
     discharge.elevation - suction.elevation + (discharge.pressure - suction.pressure) / rhoG;
   const maxBranches = Math.max(
@@ -285,7 +302,11 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
 
   const head = (flow: Flow): Length => {
     checkFlow(flow);
-    return (staticHead + velocityHeadAt(flow) + lossAt(flow)) as Length;
+    return guardResult(
+      'head',
+      staticHead + velocityHeadAt(flow) + lossAt(flow),
+      'OUT_OF_RANGE',
+    ) as Length;
   };
 
   const details = (flow: Flow): SystemPoint => {
@@ -316,7 +337,11 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
         fittingsLoss: b.fittingsLoss as Length,
         componentLoss: b.componentLoss as Length,
         totalLoss: total as Length,
-        pressureDrop: (total * rhoG) as Pressure,
+        pressureDrop: guardResult(
+          `${ev.run.name} pressure drop`,
+          total * rhoG,
+          'OUT_OF_RANGE',
+        ) as Pressure,
         elevationChange: ev.run.elevationChange,
       });
       return total;
@@ -336,7 +361,7 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     const vh = velocityHeadAt(flow);
     return {
       flow,
-      head: (staticHead + vh + loss) as Length,
+      head: guardResult('head', staticHead + vh + loss, 'OUT_OF_RANGE') as Length,
       staticHead: staticHead as Length,
       velocityHead: vh as Length,
       lossHead: loss as Length,
@@ -345,6 +370,8 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
   };
 
   const headInto = (flows: ArrayLike<number>, out: Float64Array): Float64Array => {
+    if (!(flows instanceof Float64Array)) guardArray('flows', flows);
+    guardBuffer('out', out, 0);
     if (out.length !== flows.length) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -357,7 +384,11 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
     for (let i = 0; i < flows.length; i++) {
       const q = flows[i] as number;
       checkFlow(q, `flows[${i}]`);
-      out[i] = staticHead + velocityHeadAt(q) + lossAt(q);
+      out[i] = guardResult(
+        `head at flows[${i}]`,
+        staticHead + velocityHeadAt(q) + lossAt(q),
+        'OUT_OF_RANGE',
+      );
     }
     return out;
   };
@@ -374,17 +405,29 @@ export function systemCurve(definition: SystemDefinition): SystemCurve {
 
 /** Every run of a definition, validated (for reports that list the line). */
 export function runsOf(definition: SystemDefinition): readonly PipeRun[] {
+  checkDefinition(definition);
   return buildLine(definition.runs, definition.aged === true).flatMap((el) =>
     el.kind === 'run' ? [el.ev.run] : el.group.branches.flat().map((ev) => ev.run),
   );
 }
 
 /** Validates the line and builds each run's evaluator, numbering runs in flow order. */
+/** The shape checks shared by {@link systemCurve} and {@link runsOf}. */
+function checkDefinition(definition: SystemDefinition): void {
+  guardRecord('definition', definition);
+  if (definition.name !== undefined) guardString('name', definition.name);
+  if (definition.aged !== undefined) guardBoolean('aged', definition.aged);
+  guardArray('runs', definition.runs, { max: 10_000 });
+}
+
 function buildLine(runs: readonly LineElement[], aged: boolean): Element[] {
   let position = 0;
   return runs.map((el, i): Element => {
+    guardRecord(`runs[${i}]`, el);
     if ('kind' in el && el.kind === 'parallel') {
-      const groupName = el.name ?? `parallel ${i + 1}`;
+      const groupName =
+        el.name === undefined ? `parallel ${i + 1}` : guardString(`runs[${i}].name`, el.name);
+      guardArray(`${groupName}.branches`, el.branches, { max: 1000 });
       if (el.branches.length < 2) {
         throw argumentError(
           'INVALID_ARGUMENT',
@@ -395,6 +438,7 @@ function buildLine(runs: readonly LineElement[], aged: boolean): Element[] {
         );
       }
       const branches = el.branches.map((b, j) => {
+        guardArray(`${groupName}.branches[${j}]`, b, { max: 10_000 });
         if (b.length === 0) {
           throw argumentError(
             'INVALID_ARGUMENT',

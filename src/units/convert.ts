@@ -1,5 +1,5 @@
 import { argumentError, checkFinite, HeadflowError } from '../errors';
-import { guardString } from '../guards';
+import { guardResult, guardString, kindOf } from '../guards';
 import { aliasesOfDimension, aliasTarget, markedPressure, refusedUnit } from './aliases';
 import {
   type DimensionOf,
@@ -38,7 +38,7 @@ function unknownUnit(symbol: unknown, parameter: string): HeadflowError {
         : refusedUnit(text);
   return new HeadflowError(
     'UNKNOWN_UNIT',
-    `${parameter} ${text === undefined ? String(symbol) : JSON.stringify(text)} ${said} ` +
+    `${parameter} ${text === undefined ? kindOf(symbol) : JSON.stringify(text)} ${said} ` +
       'Units are ASCII symbols such as m, ft, gal/min, m3/h, psi, kPa, degC (see unitsOf() and aliasesOf()).',
     { parameter, value: symbol, allowed: 'a unit symbol from the catalogue' },
   );
@@ -74,7 +74,7 @@ function toSI(value: number, def: UnitDefinition, symbol: string): number {
   if (def.dimension === 'temperature' && result < 0) {
     throw argumentError('OUT_OF_RANGE', 'value', value, symbol, 'at or above absolute zero (0 K)');
   }
-  return result;
+  return guardResult('value in SI', result, 'OUT_OF_RANGE');
 }
 
 /**
@@ -123,7 +123,7 @@ export function q<U extends UnitSymbol>(value: number, unit: U): Quantity<Dimens
 export function to<D extends Dimension>(quantity: Quantity<D>, unit: UnitOf<D>): number {
   const def = unitDefinition(unit);
   checkFinite('quantity', quantity, 'SI');
-  return quantity / def.factor - def.offset;
+  return guardResult('value', quantity / def.factor - def.offset, 'OUT_OF_RANGE');
 }
 
 /**
@@ -141,8 +141,8 @@ export function to<D extends Dimension>(quantity: Quantity<D>, unit: UnitOf<D>):
  * ```
  */
 export function convert(value: number, from: string, into: string): number {
-  const a = UNITS[resolveUnit(guardString('from', from), 'from')];
-  const b = UNITS[resolveUnit(guardString('into', into), 'into')];
+  const a = UNITS[resolveUnit(unitText('from', from), 'from')];
+  const b = UNITS[resolveUnit(unitText('into', into), 'into')];
   if (a.dimension !== b.dimension) {
     throw new HeadflowError(
       'WRONG_DIMENSION',
@@ -151,7 +151,13 @@ export function convert(value: number, from: string, into: string): number {
     );
   }
   checkFinite('value', value, from);
-  return toSI(value, a, from) / b.factor - b.offset;
+  return guardResult('value', toSI(value, a, from) / b.factor - b.offset, 'OUT_OF_RANGE');
+}
+
+/** A unit argument as text: a string of bounded length, or `UNKNOWN_UNIT` for anything else. */
+function unitText(parameter: string, unit: unknown): string {
+  if (typeof unit !== 'string') throw unknownUnit(unit, parameter);
+  return guardString(parameter, unit);
 }
 
 /**
@@ -164,6 +170,7 @@ export function convert(value: number, from: string, into: string): number {
  * ```
  */
 export function unitsOf<D extends Dimension>(dimension: D): readonly UnitOf<D>[] {
+  guardString('dimension', dimension);
   const list = (Object.keys(UNITS) as UnitSymbol[]).filter(
     (u) => UNITS[u].dimension === dimension,
   ) as UnitOf<D>[];

@@ -2,7 +2,7 @@ import { argumentError, HeadflowError } from '../errors';
 import { guardOneOf, guardOptions, guardString } from '../guards';
 import { markedPressure, type PressureReference } from './aliases';
 import { UNITS, type UnitOf, type UnitSymbol } from './catalogue';
-import { isUnit, q, resolveUnit, to } from './convert';
+import { DIMENSIONS, isUnit, q, resolveUnit, to } from './convert';
 import type { Dimension, Pressure, Quantity } from './quantity';
 
 /** Longest text `parseQuantity` and `parsePressure` read. */
@@ -118,6 +118,7 @@ function finite(text: string, value: number): void {
 export function parseQuantity<D extends Dimension>(text: string, dimension: D): Quantity<D>;
 export function parseQuantity(text: string): Quantity<Dimension>;
 export function parseQuantity(text: string, dimension?: Dimension): Quantity<Dimension> {
+  if (dimension !== undefined) guardOneOf('dimension', dimension, DIMENSIONS);
   const { value, unit } = split(text);
   const marked = markedPressure(unit);
   if (marked !== undefined && dimension !== undefined && dimension !== 'pressure') {

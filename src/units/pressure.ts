@@ -1,4 +1,5 @@
 import { argumentError, checkFinite, checkPositive } from '../errors';
+import { guardResult } from '../guards';
 import { STANDARD_ATMOSPHERE, STANDARD_GRAVITY } from './constants';
 import type { Acceleration, Density, Length, Pressure } from './quantity';
 
@@ -87,7 +88,7 @@ export function headFromPressure(
   checkFinite('pressure', pressure, 'Pa');
   checkPositive('density', density, 'kg/m3');
   checkPositive('g', g, 'm/s2');
-  return (pressure / (density * g)) as Length;
+  return guardResult('headFromPressure', pressure / (density * g), 'OUT_OF_RANGE') as Length;
 }
 
 /**
@@ -111,5 +112,5 @@ export function pressureFromHead(
   checkFinite('head', head, 'm');
   checkPositive('density', density, 'kg/m3');
   checkPositive('g', g, 'm/s2');
-  return (head * density * g) as Pressure;
+  return guardResult('pressureFromHead', head * density * g, 'OUT_OF_RANGE') as Pressure;
 }

@@ -78,6 +78,9 @@ export type RotationalSpeed = Quantity<'rotationalSpeed'>;
  * Brands a number that is already in coherent SI. Use it only where the number is known to
  * be SI of that dimension (inside the library, or reading back one of its own results).
  *
+ * A type brand only: it returns `value` itself and checks nothing (a test may brand NaN on
+ * purpose); every function that takes the quantity checks it.
+ *
  * @example
  * ```ts
  * const d = si<'length'>(0.1023); // 102.3 mm as a Length

@@ -36,13 +36,16 @@ function exact(x: number): Decimal {
   return new D45(mant.toString()).times(new D45(2).pow(e2));
 }
 
-/** Colebrook f at 45 digits, Newton from s = 1. */
+/**
+ * Colebrook f at 45 digits, Newton from s = 1, or from s = Re/2.51 x 1e-3 below Re 10 (still
+ * left of the root, which lies below Re/2.51 there, so the iterates still rise to it).
+ */
 function colebrookDecimal(re: number, k: number): Decimal {
   const R = exact(re);
   const K = exact(k).div(C37);
   const a = C251.div(R);
-  let s = new D45(1);
-  for (let i = 0; i < 200; i++) {
+  let s = re < 10 ? R.div(C251).times('1e-3') : new D45(1);
+  for (let i = 0; i < 2000; i++) {
     const arg = K.plus(a.times(s));
     const g = s.plus(D45.log10(arg).times(2));
     const dg = new D45(1).plus(TWO_OVER_LN10.times(a).div(arg));
@@ -92,6 +95,19 @@ describe('colebrook against a 45-digit decimal.js solution', () => {
     );
     // 3000 decimal solves take a few seconds, longer under coverage.
   }, 120_000);
+
+  it('stays exact at low Re, where the start of the solver changes (no NaN below Re 2.8)', () => {
+    // Before the low-Re start, colebrook(2, 0) and everything below Re 2.8 came out NaN.
+    let worst = 0;
+    for (const re of [1e-6, 1e-3, 0.1, 1, 2, 2.8, 3, 10, 30, 44, 45, 46, 100, 1000, 1999]) {
+      for (const k of [0, 1e-6, 1e-4, 1e-2, 0.05, 0.1]) {
+        const e = relErr(re, k);
+        worst = Math.max(worst, e);
+        expect(e, `Re ${re}, eps/D ${k}: relative error ${e}`).toBeLessThan(TOL);
+      }
+    }
+    expect(worst).toBeLessThan(TOL);
+  }, 60_000);
 
   it('keeps the value shown in the doc comment', () => {
     // Re 1e5, eps/D 1e-4: the 45-digit solve above gives 0.0185138660774716427.

@@ -53,7 +53,7 @@ describe('aliases: special values and errors', () => {
     expect(none.message).not.toContain('mean');
   });
   it('convert refuses non-string units and unknown spellings', () => {
-    expectHeadflowError(() => convert(1, 5 as unknown as string, 'm'), 'INVALID_ARGUMENT');
+    expectHeadflowError(() => convert(1, 5 as unknown as string, 'm'), 'UNKNOWN_UNIT');
     expectHeadflowError(() => convert(1, 'ft', 'KM'), 'UNKNOWN_UNIT');
     expectHeadflowError(() => convert(1, 'gpm', 'ft'), 'WRONG_DIMENSION');
   });

@@ -1,0 +1,75 @@
+/**
+ * The shape checks at the entry of {@link evaluateDesign}: every object, list, name and choice
+ * of a design input is what it should be before any work starts, so that a design built by
+ * hand (not read from a file) is refused with a HeadflowError naming the field, never with a
+ * TypeError from deep inside. The values themselves are checked where they are used.
+ *
+ * @module
+ */
+import {
+  guardArray,
+  guardFunction,
+  guardNumber,
+  guardOneOf,
+  guardRange,
+  guardRecord,
+  guardString,
+} from '../guards';
+import type { DesignInput } from './types';
+
+/** Largest number of candidates, cases and profile rows a design takes. */
+const MAX_ITEMS = 1000;
+
+/** Throws `INVALID_ARGUMENT` naming the first field of `input` that has the wrong shape. */
+export function checkDesignShape(input: DesignInput): void {
+  guardRecord('input', input);
+  guardString('name', input.name);
+  const system = guardRecord('system', input.system);
+  const fluid = guardRecord('system.fluid', system['fluid']);
+  guardNumber('system.fluid.temperature', fluid['temperature'], 'K');
+  guardNumber('system.fluid.density', fluid['density'], 'kg/m3');
+  for (const [i, run] of guardArray('system.runs', system['runs'], { max: 10_000 }).entries()) {
+    guardRecord(`system.runs[${i}]`, run);
+  }
+  if (input.fluidName !== undefined) guardString('fluidName', input.fluidName);
+  if (input.cases !== undefined) guardArray('cases', input.cases, { max: MAX_ITEMS });
+  if (input.pumpLocation !== undefined) {
+    guardNumber(
+      'pumpLocation.elevation',
+      guardRecord('pumpLocation', input.pumpLocation)['elevation'],
+      'm',
+    );
+  }
+  if (input.candidates !== undefined) {
+    guardArray('candidates', input.candidates, { max: MAX_ITEMS });
+    input.candidates.forEach((c, i) => {
+      const at = `candidates[${i}]`;
+      const candidate = guardRecord(at, c);
+      guardString(`${at}.name`, candidate['name']);
+      const pump = guardRecord(`${at}.pump`, candidate['pump']);
+      for (const m of ['head', 'efficiency', 'shaftPower', 'atSpeed', 'shares'] as const) {
+        guardFunction(`${at}.pump.${m}`, pump[m]);
+      }
+      guardRange(`${at}.pump.speed`, pump['speed'], { min: 0, minOpen: true, unit: 'rad/s' });
+      if (candidate['motorSeries'] !== undefined) {
+        guardOneOf(`${at}.motorSeries`, candidate['motorSeries'], ['nema', 'iec'] as const);
+      }
+    });
+  }
+  if (input.profile !== undefined) {
+    guardArray('profile', input.profile, { max: MAX_ITEMS * 100 });
+    for (const [i, row] of input.profile.entries()) guardRecord(`profile[${i}]`, row);
+  }
+  if (input.energyPrice !== undefined) {
+    const price = guardRecord('energyPrice', input.energyPrice);
+    guardRange('energyPrice.perKWh', price['perKWh'], { min: 0 });
+    guardString('energyPrice.currency', price['currency']);
+  }
+  if (input.limits !== undefined) {
+    const limits = guardRecord('limits', input.limits);
+    for (const k of ['suctionVelocity', 'dischargeVelocity'] as const) {
+      if (limits[k] !== undefined) guardRecord(`limits.${k}`, limits[k]);
+    }
+  }
+  if (input.units !== undefined) guardOneOf('units', input.units, ['si', 'us'] as const);
+}
