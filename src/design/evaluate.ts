@@ -39,6 +39,8 @@ import { CAUTIONS } from './cautions';
 import { checkMessage } from './check-message';
 import {
   allowableRegionCheck,
+  CANDIDATE_CHECKS,
+  CASE_CHECKS,
   type Candidate,
   curveFitChecks,
   deadHeadCheck,
@@ -58,6 +60,7 @@ import {
   preferredRegionCheck,
   shutoffPressureCheck,
   velocityCheck,
+  viscousCorrection,
 } from './checks/index';
 import type {
   Arrangement,
@@ -612,11 +615,26 @@ function evaluateCandidate(
 ): Omit<CandidateReport, 'rank'> {
   const checks: Check[] = [];
   curveFitChecks(c, checks);
-  const cases = family.map((s) => runCase(input, c, s, limits, checks));
+  // The set as it runs on each case's liquid: its water curve corrected for viscosity where due.
+  const onLiquid = family.map((s) => viscousCorrection(c, s.curve.definition.fluid, s.name));
+  for (const v of onLiquid) if (v.check !== undefined) checks.push(v.check);
+  const inCase = onLiquid.map((v) => v.candidate);
+  const cases = family.map((s, i) => runCase(input, inCase[i] ?? c, s, limits, checks));
   const design = family[0] as ScenarioCurve;
   const density = design.curve.definition.fluid.density;
   const series = c.input.motorSeries ?? 'iec';
-  const fullSpeed = c.fullSpeed;
+  // The motor is sized on the most viscous case's (corrected) curve, the energy on the design
+  // case's: both are the water curve itself for a water-like liquid.
+  const mostViscous = family.reduce(
+    (best, s, i) =>
+      s.curve.definition.fluid.kinematicViscosity >
+      (family[best] as ScenarioCurve).curve.definition.fluid.kinematicViscosity
+        ? i
+        : best,
+    0,
+  );
+  const fullSpeed = (inCase[mostViscous] ?? c).fullSpeed;
+  const onDesign = inCase[0] ?? c;
   let maxShaftPower: Power | undefined;
   let motor: CandidateReport['motor'];
   let dutyOnlyMotor: CandidateReport['dutyOnlyMotor'];
@@ -660,7 +678,7 @@ function evaluateCandidate(
       hours: r.hours,
     }));
     const e = annualEnergy({
-      pump: c.control === 'speed' ? c.pump : fullSpeed,
+      pump: c.control === 'speed' ? onDesign.pump : onDesign.fullSpeed,
       system: perPump(c, design.curve),
       profile: perPumpProfile,
       density,
@@ -702,6 +720,16 @@ function evaluateCandidate(
       if (k !== undefined) checks.push(k);
     }
   }
+  const context = {
+    input,
+    candidate: c,
+    inCase,
+    family,
+    cases,
+    limits,
+    npshAvailableAt: (curve: SystemCurve, flow: number) => npshAvailableAt(input, curve, flow),
+  };
+  for (const k of CANDIDATE_CHECKS) checks.push(...k.run(context));
   return {
     name: c.name,
     count: c.count,
@@ -964,6 +992,10 @@ export function evaluateDesign(
   });
   const systemChecks: Check[] = [];
   const duty = family.map((s) => dutyInCase(input, s, limits, systemChecks));
+  family.forEach((scenario, i) => {
+    const d = duty[i] as CaseDuty;
+    for (const k of CASE_CHECKS) systemChecks.push(...k.run({ input, scenario, duty: d, limits }));
+  });
   if (
     input.pumpLocation !== undefined &&
     family.some((s) => s.curve.definition.fluid.vaporPressure === undefined)

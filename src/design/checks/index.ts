@@ -6,12 +6,16 @@
  * @module
  */
 import { ALLOWABLE_REGION } from './allowable-region';
+import type { CandidateCheck } from './candidate-context';
+import type { CaseCheck } from './case-context';
 import type { CheckInfo } from './check';
 import { CURVE_FIT } from './curve-fit';
 import { DEAD_HEAD } from './dead-head';
 import { DUTY_FLOW } from './duty-flow';
 import { ENERGY } from './energy';
 import { FLOW_REGIME } from './flow-regime';
+import { INTAKE_SUBMERGENCE, intakeSubmergence } from './intake-submergence';
+import { LOW_FLOW_HEATING, lowFlowHeating } from './low-flow-heating';
 import { MOTOR_OVERLOAD } from './motor-overload';
 import { MOTOR_SIZING } from './motor-sizing';
 import { NEAR_BOILING } from './near-boiling';
@@ -20,9 +24,13 @@ import { NPSH_DATA } from './npsh-data';
 import { NPSH_MARGIN } from './npsh-margin';
 import { PREFERRED_REGION } from './preferred-region';
 import { SHUTOFF_PRESSURE } from './shutoff-pressure';
+import { SURGE, surge } from './surge';
 import { VELOCITY } from './velocity';
+import { VISCOUS_CORRECTION } from './viscous-correction';
 
 export { allowableRegionCheck } from './allowable-region';
+export type { CandidateCheck, CandidateCheckContext } from './candidate-context';
+export type { CaseCheck, CaseCheckContext } from './case-context';
 export { type CheckInfo, COMMON, check } from './check';
 export type { Candidate, Limits } from './context';
 export { curveFitChecks } from './curve-fit';
@@ -30,6 +38,8 @@ export { deadHeadCheck } from './dead-head';
 export { dutyFlowCheck } from './duty-flow';
 export { energyCheck } from './energy';
 export { flowRegimeCheck } from './flow-regime';
+export { intakeSubmergenceMessage } from './intake-submergence';
+export { lowFlowHeatingMessage } from './low-flow-heating';
 export { motorOverloadAtRunOut, motorOverloadInCase } from './motor-overload';
 export { motorSizingError, motorSizingNote } from './motor-sizing';
 export { nearBoilingCheck } from './near-boiling';
@@ -38,7 +48,9 @@ export { npshNoDataCheck, npshNoVaporPressureCheck } from './npsh-data';
 export { npshMarginCheck } from './npsh-margin';
 export { preferredRegionCheck } from './preferred-region';
 export { shutoffPressureCheck } from './shutoff-pressure';
+export { surgeMessage } from './surge';
 export { velocityCheck } from './velocity';
+export { viscousCorrection, viscousCorrectionMessage } from './viscous-correction';
 
 /** Every check the design evaluation makes, in the order of docs/checks.md. */
 export const CHECKS: readonly CheckInfo[] = [
@@ -57,4 +69,14 @@ export const CHECKS: readonly CheckInfo[] = [
   ENERGY,
   DEAD_HEAD,
   SHUTOFF_PRESSURE,
+  VISCOUS_CORRECTION,
+  SURGE,
+  LOW_FLOW_HEATING,
+  INTAKE_SUBMERGENCE,
 ];
+
+/** Checks of each operating case, run by `evaluateDesign` in turn: add a file, add it here. */
+export const CASE_CHECKS: readonly CaseCheck[] = [surge];
+
+/** Checks of a candidate set over all cases, run in turn: add a file, add it here. */
+export const CANDIDATE_CHECKS: readonly CandidateCheck[] = [lowFlowHeating, intakeSubmergence];
