@@ -151,7 +151,7 @@ export function surgeMessage(c: Check, s: Say): string {
   const parts = [
     `Surge screening estimate on a pump trip or valve closure: wave speed ${s.velocity(n('waveSpeed'))}${pipe} over ${s.length(n('length'))}, ${s.velocity(n('velocity'))} brought to rest in ${how}: surge ${s.head(n('surgeHead'))}.`,
     `Highest pressure ${s.absolute(n('highPressure'))}${c.values['designPressure'] === undefined ? ' (no design pressure given)' : w('over') === 'yes' ? `, above the design pressure ${s.absolute(n('designPressure'))}` : `, within the design pressure ${s.absolute(n('designPressure'))}`};`,
-    `lowest ${s.absolute(n('lowPressure'))}${c.values['vaporPressure'] === undefined ? ' (no vapour pressure)' : w('under') === 'yes' ? `, at or below the vapour pressure ${s.absolute(n('vaporPressure'))}: column separation risk` : `, above the vapour pressure ${s.absolute(n('vaporPressure'))}`}.`,
+    `lowest (steady less the surge) ${s.absolute(n('lowPressure'))}${c.values['vaporPressure'] === undefined ? ' (no vapour pressure)' : w('under') === 'yes' ? `, at or below the vapour pressure ${s.absolute(n('vaporPressure'))}: column separation risk` : `, above the vapour pressure ${s.absolute(n('vaporPressure'))}`}.`,
     `A transient analysis is needed for design${c.severity === 'warning' ? `; usual remedies: ${REMEDIES}` : ''}.`,
   ];
   return parts.join(' ');
