@@ -47,6 +47,7 @@ import {
   dutyFlowCheck,
   energyCheck,
   flowRegimeCheck,
+  guardCheckInputs,
   type Limits,
   motorOverloadAtRunOut,
   motorOverloadInCase,
@@ -949,6 +950,7 @@ export function evaluateDesign(
         }) as Pressure);
   const limits = resolveLimits(input);
   checkLocation(input);
+  guardCheckInputs(input);
   const family = systemScenarios(
     { ...input.system, name: input.system.name ?? 'design case' },
     input.cases ?? [],

@@ -38,6 +38,7 @@ export { deadHeadCheck } from './dead-head';
 export { dutyFlowCheck } from './duty-flow';
 export { energyCheck } from './energy';
 export { flowRegimeCheck } from './flow-regime';
+export { guardCheckInputs } from './inputs';
 export { intakeSubmergenceMessage } from './intake-submergence';
 export { lowFlowHeatingMessage } from './low-flow-heating';
 export { motorOverloadAtRunOut, motorOverloadInCase } from './motor-overload';

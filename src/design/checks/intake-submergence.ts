@@ -26,7 +26,7 @@ export const INTAKE_SUBMERGENCE: CheckInfo = {
 
 function run(x: CandidateCheckContext): Check[] {
   const ask = x.input.intake;
-  if (ask === undefined) return [];
+  if (ask === undefined || ask === null) return [];
   const c = x.candidate;
   const missing: string[] = [];
   if (ask.depth === undefined) missing.push('intake.depth');

@@ -48,7 +48,7 @@ function saturationTemperature(liquid: Fluid, from: number, pressure: number): n
 
 function run(x: CandidateCheckContext): Check[] {
   const ask = x.input.lowFlow;
-  if (ask === undefined) return [];
+  if (ask === undefined || ask === null) return [];
   const c = x.candidate;
   const minimum =
     ask.minimumFlow ?? c.fullSpeed.allowableRegion?.min ?? (c.fullSpeed.flowRange.min as number);

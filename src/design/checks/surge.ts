@@ -55,7 +55,7 @@ export function surgeCheck(
   g: Acceleration | undefined,
   limits: Limits,
 ): Check | undefined {
-  if (input.surge === undefined) return undefined;
+  if (input.surge === undefined || input.surge === null) return undefined;
   const missing: string[] = [];
   if (input.pumpLocation === undefined) missing.push('pumpLocation');
   if (fluid.bulkModulus === undefined) missing.push("the fluid's bulk modulus");
