@@ -136,6 +136,18 @@ export const surge: CaseCheck = {
 const REMEDIES =
   'slower valve closure, a surge vessel, air (vacuum-breaking) valves, a flywheel on the pump, or a bypass';
 
+/** The down-surge in words: steady less the surge, against the vapour pressure. */
+function lowest(c: Check, s: Say): string {
+  const low = c.values['lowPressure'] ?? Number.NaN;
+  const pv = c.values['vaporPressure'];
+  if (pv === undefined)
+    return `lowest (steady less the surge) ${s.absolute(low)} (no vapour pressure given).`;
+  if (c.words['under'] === 'yes') {
+    return `steady less the surge falls below the vapour pressure ${s.absolute(pv)} (the estimate gives ${s.absolute(low)}): column separation risk, and a larger up-surge when the column rejoins.`;
+  }
+  return `lowest (steady less the surge) ${s.absolute(low)}, above the vapour pressure ${s.absolute(pv)}.`;
+}
+
 /** The message of a `surge` finding. */
 export function surgeMessage(c: Check, s: Say): string {
   const n = (k: string): number => c.values[k] ?? Number.NaN;
@@ -151,7 +163,7 @@ export function surgeMessage(c: Check, s: Say): string {
   const parts = [
     `Surge screening estimate on a pump trip or valve closure: wave speed ${s.velocity(n('waveSpeed'))}${pipe} over ${s.length(n('length'))}, ${s.velocity(n('velocity'))} brought to rest in ${how}: surge ${s.head(n('surgeHead'))}.`,
     `Highest pressure ${s.absolute(n('highPressure'))}${c.values['designPressure'] === undefined ? ' (no design pressure given)' : w('over') === 'yes' ? `, above the design pressure ${s.absolute(n('designPressure'))}` : `, within the design pressure ${s.absolute(n('designPressure'))}`};`,
-    `lowest (steady less the surge) ${s.absolute(n('lowPressure'))}${c.values['vaporPressure'] === undefined ? ' (no vapour pressure)' : w('under') === 'yes' ? `, at or below the vapour pressure ${s.absolute(n('vaporPressure'))}: column separation risk` : `, above the vapour pressure ${s.absolute(n('vaporPressure'))}`}.`,
+    lowest(c, s),
     `A transient analysis is needed for design${c.severity === 'warning' ? `; usual remedies: ${REMEDIES}` : ''}.`,
   ];
   return parts.join(' ');
