@@ -6,6 +6,10 @@
  * @module
  */
 import { guardOneOf, guardRecord, guardString } from '../guards';
+import { intakeSubmergenceMessage } from './checks/intake-submergence';
+import { lowFlowHeatingMessage } from './checks/low-flow-heating';
+import { surgeMessage } from './checks/surge';
+import { viscousCorrectionMessage } from './checks/viscous-correction';
 import { type Say, type SymbolStyle, sayIn, short } from './say';
 import type { Check, UnitSystem } from './types';
 
@@ -101,6 +105,14 @@ function message(c: Check, s: Say): string {
       return w(c, 'curve') === 'efficiency'
         ? `The efficiency fit (${w(c, 'fit')}) misses a catalogue point by ${short(100 * n(c, 'maxResidual'), 3)} percentage points, more than the tolerance of ${short(100 * n(c, 'tolerance'), 2)} percentage point: the BEP, the power and the yearly energy move with it. Use the default fit or another degree.`
         : `The head fit (${w(c, 'fit')}) misses a catalogue point by ${pct(n(c, 'maxRelativeResidual'))} of its head (${s.head(n(c, 'maxResidual'))}), more than the tolerance of ${pct(n(c, 'tolerance'), 2)}: the operating points and power move with it. Use the default fit (through every point) or another degree.`;
+    case 'viscous-correction':
+      return viscousCorrectionMessage(c, s);
+    case 'surge':
+      return surgeMessage(c, s);
+    case 'low-flow-heating':
+      return lowFlowHeatingMessage(c, s);
+    case 'intake-submergence':
+      return intakeSubmergenceMessage(c, s);
     default:
       return c.message;
   }

@@ -9,11 +9,8 @@ import { fitting, fittingK, kFromCv, kFromKv } from '../losses/index';
 import { type PipeDimensions, material as pipeMaterial } from '../pipes/index';
 import {
   annualEnergy,
-  CATALOGUE_FIT_TOLERANCE,
-  type FitReport,
   motorForPump,
   npshAvailable,
-  npshMargin,
   operatingPoint,
   type ProfileRow,
   type PumpCurve,
@@ -34,13 +31,38 @@ import {
   type Length,
   type Power,
   type Pressure,
-  type RotationalSpeed,
   STANDARD_ATMOSPHERE,
   STANDARD_GRAVITY,
   type Velocity,
 } from '../units/index';
 import { CAUTIONS } from './cautions';
 import { checkMessage } from './check-message';
+import {
+  allowableRegionCheck,
+  CANDIDATE_CHECKS,
+  CASE_CHECKS,
+  type Candidate,
+  curveFitChecks,
+  deadHeadCheck,
+  dutyFlowCheck,
+  energyCheck,
+  flowRegimeCheck,
+  guardCheckInputs,
+  type Limits,
+  motorOverloadAtRunOut,
+  motorOverloadInCase,
+  motorSizingError,
+  motorSizingNote,
+  nearBoilingCheck,
+  noOperatingPointCheck,
+  npshMarginCheck,
+  npshNoDataCheck,
+  npshNoVaporPressureCheck,
+  preferredRegionCheck,
+  shutoffPressureCheck,
+  velocityCheck,
+  viscousCorrection,
+} from './checks/index';
 import { checkDesignShape } from './input-shape';
 import type {
   Arrangement,
@@ -72,61 +94,7 @@ export const DESIGN_DEFAULTS = {
   hoursPerYear: 8760,
 } as const;
 
-const NPSH_SOURCE =
-  'ANSI/HI 9.6.1 (NPSH margin by application, as summarized in the pumps module; use the edition your project names)';
-const REGION_SOURCE = 'ANSI/HI 9.6.3 (preferred operating region 70-120 % of BEP flow by default)';
-const COMMON = 'common practice';
-const DUTY_TOLERANCE_SOURCE =
-  'limits.dutyFlowTolerance (default 2 %: system-curve uncertainty, common practice; within the flow tolerance of pump acceptance tests, ISO 9906 / ANSI/HI 14.6)';
 const SAMPLES = 61;
-
-interface Limits {
-  readonly units: UnitSystem;
-  readonly npshMarginRatio: number;
-  readonly npshMinimumMargin: number;
-  readonly suction: { readonly min: number; readonly max: number };
-  readonly discharge: { readonly min: number; readonly max: number };
-  readonly nearBoilingRatio: number;
-  readonly designPressure: number | undefined;
-  readonly dutyFlowTolerance: number;
-}
-
-/** A candidate with its defaults filled in and its per-pump view of each system. */
-interface Candidate {
-  readonly input: CandidateInput;
-  readonly name: string;
-  readonly pump: PumpCurve;
-  readonly count: number;
-  readonly arrangement: Arrangement;
-  readonly control: SpeedControl;
-  readonly maxSpeed: RotationalSpeed;
-  /** The pump at its highest speed (the curve itself unless `maxSpeed` differs). */
-  readonly fullSpeed: PumpCurve;
-  /** Name of the set for charts: `"A (2 in parallel)"`, or the candidate's name. */
-  readonly label: string;
-  /** Set flow from one pump's flow. */
-  readonly setFlow: (q: number) => number;
-  /** One pump's flow from the set's flow. */
-  readonly pumpFlow: (q: number) => number;
-  /** Set head from one pump's head. */
-  readonly setHead: (h: number) => number;
-}
-
-/**
- * A check without its message: `evaluateDesign` writes every message at the end, in the
- * report's units, from the values and words (see {@link withMessages}).
- */
-function check(
-  id: string,
-  severity: Check['severity'],
-  candidate: string | undefined,
-  caseName: string | undefined,
-  values: Record<string, number>,
-  source: string,
-  words: Record<string, string> = {},
-): Check {
-  return { id, severity, candidate, case: caseName, message: '', values, words, source };
-}
 
 /** The checks with their messages written in a unit system. */
 function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
@@ -481,58 +449,18 @@ function dutyInCase(
   const d = s.curve.details(input.dutyFlow);
   const fluid = s.curve.definition.fluid;
   const suctionPressure = s.curve.definition.suction.pressure;
-  if (
-    fluid.vaporPressure !== undefined &&
-    fluid.vaporPressure >= limits.nearBoilingRatio * suctionPressure
-  ) {
-    checks.push(
-      check(
-        'near-boiling',
-        'warning',
-        undefined,
-        s.name,
-        {
-          vaporPressure: fluid.vaporPressure,
-          suctionPressure,
-          ratio: fluid.vaporPressure / suctionPressure,
-        },
-        COMMON,
-      ),
-    );
-  }
+  const boiling = nearBoilingCheck(s.name, fluid.vaporPressure, suctionPressure, limits);
+  if (boiling !== undefined) checks.push(boiling);
   const suctionCount = input.pumpLocation?.suctionRuns ?? 1;
   d.runs.forEach((r, i) => {
-    if (r.regime === 'laminar' || r.regime === 'transition') {
-      checks.push(
-        check(
-          'flow-regime',
-          'warning',
-          undefined,
-          s.name,
-          { reynolds: r.reynolds },
-          r.regime === 'laminar'
-            ? 'ANSI/HI 9.6.7 (viscosity correction)'
-            : 'common practice (transition 2300 < Re < 4000)',
-          { run: runLabel(r), regime: r.regime },
-        ),
-      );
-    }
+    const regime = flowRegimeCheck(s.name, runLabel(r), r.regime, r.reynolds);
+    if (regime !== undefined) checks.push(regime);
     if (input.pumpLocation !== undefined && r.group === undefined && r.flow > 0) {
       const isSuction = i < suctionCount;
       const range = isSuction ? limits.suction : limits.discharge;
-      if (r.velocity < range.min || r.velocity > range.max) {
-        checks.push(
-          check(
-            'velocity',
-            'warning',
-            undefined,
-            s.name,
-            { velocity: r.velocity, min: range.min, max: range.max },
-            COMMON,
-            { run: r.name, side: isSuction ? 'suction' : 'discharge' },
-          ),
-        );
-      }
+      const side = isSuction ? 'suction' : 'discharge';
+      const fast = velocityCheck(s.name, r.name, side, r.velocity, range);
+      if (fast !== undefined) checks.push(fast);
     }
   });
   const def = s.curve.definition;
@@ -554,42 +482,6 @@ function dutyInCase(
   };
 }
 
-/** Shortfalls below this fraction of the duty flow are round-off of the operating point. */
-const FLOW_ROUND_OFF = 1e-9;
-
-/**
- * The duty-flow check of a fixed-speed set: any shortfall is a note with its percentage, a
- * shortfall beyond `limits.dutyFlowTolerance` an error; an excess beyond it a note (a valve or
- * a trim would bring the flow down).
- */
-function dutyFlowCheck(
-  duty: number,
-  flow: number,
-  candidate: string,
-  caseName: string,
-  limits: Limits,
-  checks: Check[],
-): void {
-  const tolerance = limits.dutyFlowTolerance;
-  const short = (duty - flow) / duty;
-  const values = { flow, dutyFlow: duty, shortfall: Math.max(0, short), tolerance };
-  if (short > FLOW_ROUND_OFF) {
-    const beyond = short > tolerance;
-    checks.push(
-      check(
-        'duty-flow',
-        beyond ? 'error' : 'info',
-        candidate,
-        caseName,
-        values,
-        DUTY_TOLERANCE_SOURCE,
-      ),
-    );
-  } else if (-short > tolerance) {
-    checks.push(check('duty-flow', 'info', candidate, caseName, values, COMMON));
-  }
-}
-
 /** The operating region of a pump's share, from the pumps module's own region test. */
 function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   if (share?.inPreferredRegion === undefined || share.inAllowableRegion === undefined) {
@@ -607,56 +499,6 @@ function message(e: unknown): string {
 /** A run's name with its branch path (`loop / branch 2 / hose`). */
 function runLabel(r: { readonly name: string; readonly group: string | undefined }): string {
   return r.group ? `${r.group} / ${r.name}` : r.name;
-}
-
-/**
- * Why a set has no operating point in a case, as a reason and its numbers (SI), worked out
- * from the curves themselves so that the report can say it in any unit system.
- */
-function noPointReason(
-  c: Candidate,
-  system: SystemCurveLike,
-  dutyFlow: number,
-): { words: Record<string, string>; values: Record<string, number> } {
-  if (c.control === 'speed') {
-    const top = c.maxSpeed === c.pump.speed ? c.pump : c.pump.atSpeed(c.maxSpeed);
-    const perPumpDuty = c.pumpFlow(dutyFlow);
-    const m = c.arrangement === 'series' ? c.count : 1;
-    if (perPumpDuty > top.flowRange.max) {
-      return {
-        words: { reason: 'beyond-curve' },
-        values: { dutyFlow, maxSpeed: c.maxSpeed, maxFlow: c.setFlow(top.flowRange.max) },
-      };
-    }
-    const pumpHead = top.head(perPumpDuty as Flow) * m;
-    const systemHead = system.head(perPumpDuty as Flow) * m;
-    if (pumpHead < systemHead) {
-      return {
-        words: { reason: 'too-little-head' },
-        values: { dutyFlow, maxSpeed: c.maxSpeed, pumpHead, systemHead },
-      };
-    }
-    return { words: { reason: 'below-curve' }, values: { dutyFlow, systemHead } };
-  }
-  const m = c.arrangement === 'series' ? c.count : 1;
-  const { min, max } = c.fullSpeed.flowRange;
-  const headMin = c.fullSpeed.head(min) * m;
-  const systemMin = system.head(min) * m;
-  if (headMin < systemMin) {
-    return {
-      words: { reason: 'cannot-reach' },
-      values: { dutyFlow, pumpHead: headMin, systemHead: systemMin },
-    };
-  }
-  return {
-    words: { reason: 'run-out' },
-    values: {
-      dutyFlow,
-      maxFlow: c.setFlow(max),
-      pumpHead: c.fullSpeed.head(max) * m,
-      systemHead: system.head(max) * m,
-    },
-  };
 }
 
 /** One candidate in one case: where it runs and the checks there. */
@@ -704,16 +546,7 @@ function runCase(
     }
   } catch (e) {
     message(e);
-    const reason = noPointReason(c, system, input.dutyFlow);
-    const k = check(
-      'no-operating-point',
-      'error',
-      c.name,
-      s.name,
-      reason.values,
-      COMMON,
-      reason.words,
-    );
+    const k = noOperatingPointCheck(c, system, input.dutyFlow, s.name);
     checks.push(k);
     return { ...empty, failure: checkMessage(k, limits.units) };
   }
@@ -726,27 +559,9 @@ function runCase(
   const region = regionOf(share);
   if (c.control === 'fixed') dutyFlowCheck(input.dutyFlow, flow, c.name, s.name, limits, checks);
   if (region === 'allowable') {
-    checks.push(
-      check(
-        'preferred-region',
-        'warning',
-        c.name,
-        s.name,
-        { percentOfBep: percentOfBep ?? 0 },
-        REGION_SOURCE,
-      ),
-    );
+    checks.push(preferredRegionCheck(c.name, s.name, percentOfBep));
   } else if (region === 'outside') {
-    checks.push(
-      check(
-        'allowable-region',
-        'error',
-        c.name,
-        s.name,
-        { percentOfBep: percentOfBep ?? 0 },
-        'ANSI/HI 9.6.3 (allowable operating region; the manufacturer states it)',
-      ),
-    );
+    checks.push(allowableRegionCheck(c.name, s.name, percentOfBep));
   }
   const npsha = npshAvailableAt(input, s.curve, flow);
   const npshr =
@@ -755,59 +570,17 @@ function runCase(
       : undefined;
   let npshRatio: number | undefined;
   if (npsha !== undefined && npshr !== undefined) {
-    const m = npshMargin({
-      available: npsha,
-      required: npshr,
-      marginRatio: limits.npshMarginRatio,
-      minimumMargin: limits.npshMinimumMargin as Length,
-    });
+    const m = npshMarginCheck(c.name, s.name, npsha, npshr, limits);
     npshRatio = m.ratio;
-    if (npsha < npshr) {
-      checks.push(
-        check(
-          'npsh-margin',
-          'error',
-          c.name,
-          s.name,
-          { npshAvailable: npsha, npshRequired: npshr, ratio: m.ratio },
-          NPSH_SOURCE,
-        ),
-      );
-    } else if (!m.ok) {
-      checks.push(
-        check(
-          'npsh-margin',
-          'warning',
-          c.name,
-          s.name,
-          {
-            npshAvailable: npsha,
-            npshRequired: npshr,
-            ratio: m.ratio,
-            requiredAvailable: m.requiredAvailable,
-          },
-          NPSH_SOURCE,
-        ),
-      );
-    }
+    if (m.check !== undefined) checks.push(m.check);
   } else if (input.pumpLocation !== undefined && npshr === undefined) {
-    checks.push(check('npsh-data', 'warning', c.name, s.name, { flow }, COMMON));
+    checks.push(npshNoDataCheck(c.name, s.name, flow));
   }
   if (c.input.motorRating !== undefined) {
     const perPumpPower = shaftPower / c.count;
     const sf = c.input.serviceFactor ?? 1;
-    if (perPumpPower > c.input.motorRating * sf) {
-      checks.push(
-        check(
-          'motor-overload',
-          'error',
-          c.name,
-          s.name,
-          { shaftPower: perPumpPower, motorRating: c.input.motorRating, serviceFactor: sf },
-          'NEMA MG 1 / IEC 60034-1 (rated output)',
-        ),
-      );
-    }
+    const overload = motorOverloadInCase(c.name, s.name, perPumpPower, c.input.motorRating, sf);
+    if (overload !== undefined) checks.push(overload);
   }
   const details = s.curve.details(flow as Flow);
   const drive = c.input.driveEfficiency ?? 1;
@@ -844,11 +617,26 @@ function evaluateCandidate(
 ): Omit<CandidateReport, 'rank'> {
   const checks: Check[] = [];
   curveFitChecks(c, checks);
-  const cases = family.map((s) => runCase(input, c, s, limits, checks));
+  // The set as it runs on each case's liquid: its water curve corrected for viscosity where due.
+  const onLiquid = family.map((s) => viscousCorrection(c, s.curve.definition.fluid, s.name));
+  for (const v of onLiquid) if (v.check !== undefined) checks.push(v.check);
+  const inCase = onLiquid.map((v) => v.candidate);
+  const cases = family.map((s, i) => runCase(input, inCase[i] ?? c, s, limits, checks));
   const design = family[0] as ScenarioCurve;
   const density = design.curve.definition.fluid.density;
   const series = c.input.motorSeries ?? 'iec';
-  const fullSpeed = c.fullSpeed;
+  // The motor is sized on the most viscous case's (corrected) curve, the energy on the design
+  // case's: both are the water curve itself for a water-like liquid.
+  const mostViscous = family.reduce(
+    (best, s, i) =>
+      s.curve.definition.fluid.kinematicViscosity >
+      (family[best] as ScenarioCurve).curve.definition.fluid.kinematicViscosity
+        ? i
+        : best,
+    0,
+  );
+  const fullSpeed = (inCase[mostViscous] ?? c).fullSpeed;
+  const onDesign = inCase[0] ?? c;
   let maxShaftPower: Power | undefined;
   let motor: CandidateReport['motor'];
   let dutyOnlyMotor: CandidateReport['dutyOnlyMotor'];
@@ -871,44 +659,19 @@ function evaluateCandidate(
       powers.length === 0
         ? undefined
         : selectMotor((Math.max(...powers) / c.count) as Power, motorOptions);
-    if (dutyOnlyMotor !== undefined && dutyOnlyMotor.rating < motor.rating) {
-      checks.push(
-        check(
-          'motor-sizing',
-          'info',
-          c.name,
-          undefined,
-          {
-            dutyOnly: dutyOnlyMotor.rating,
-            dutyOnlyNameplate: dutyOnlyMotor.nameplate,
-            nonOverloading: motor.rating,
-            nonOverloadingNameplate: motor.nameplate,
-            maxShaftPower,
-          },
-          series === 'nema' ? 'NEMA MG 1 (standard ratings)' : 'IEC 60072-1 (standard ratings)',
-          { dutyOnlyUnit: dutyOnlyMotor.unit, nonOverloadingUnit: motor.unit },
-        ),
-      );
+    if (dutyOnlyMotor !== undefined) {
+      const note = motorSizingNote(c.name, series, dutyOnlyMotor, motor, maxShaftPower);
+      if (note !== undefined) checks.push(note);
     }
-    if (
-      c.input.motorRating !== undefined &&
-      maxShaftPower > c.input.motorRating * (c.input.serviceFactor ?? 1)
-    ) {
-      checks.push(
-        check(
-          'motor-overload',
-          'warning',
-          c.name,
-          undefined,
-          { maxShaftPower, motorRating: c.input.motorRating },
-          COMMON,
-        ),
-      );
+    if (c.input.motorRating !== undefined) {
+      const sf = c.input.serviceFactor ?? 1;
+      const runOut = motorOverloadAtRunOut(c.name, maxShaftPower, c.input.motorRating, sf);
+      if (runOut !== undefined) checks.push(runOut);
     }
   } catch (e) {
     message(e);
     const power = e instanceof HeadflowError && typeof e.value === 'number' ? e.value : Number.NaN;
-    checks.push(check('motor-sizing', 'error', c.name, undefined, { power }, COMMON));
+    checks.push(motorSizingError(c.name, power));
   }
   let energy: CandidateReport['energy'];
   try {
@@ -917,7 +680,7 @@ function evaluateCandidate(
       hours: r.hours,
     }));
     const e = annualEnergy({
-      pump: c.control === 'speed' ? c.pump : fullSpeed,
+      pump: c.control === 'speed' ? onDesign.pump : onDesign.fullSpeed,
       system: perPump(c, design.curve),
       profile: perPumpProfile,
       density,
@@ -943,20 +706,11 @@ function evaluateCandidate(
     message(e);
     const perPumpFlow =
       e instanceof HeadflowError && typeof e.value === 'number' ? e.value : Number.NaN;
-    checks.push(
-      check('energy', 'error', c.name, design.name, { flow: c.setFlow(perPumpFlow) }, COMMON, {
-        detail:
-          c.control === 'speed'
-            ? "the set cannot deliver it within the drive's highest speed and the catalogue curve"
-            : 'at full speed the set gives less head than the system needs there, and throttling cannot raise head',
-      }),
-    );
+    checks.push(energyCheck(c.name, design.name, c.setFlow(perPumpFlow), c.control));
   }
   const shutoff = fullSpeed.shutoffHead ?? fullSpeed.head(fullSpeed.flowRange.min);
   const setShutoff = c.setHead(shutoff);
-  checks.push(
-    check('dead-head', 'warning', c.name, undefined, { shutoffHead: setShutoff }, COMMON),
-  );
+  checks.push(deadHeadCheck(c.name, setShutoff));
   if (limits.designPressure !== undefined) {
     for (const s of family) {
       const def = s.curve.definition;
@@ -964,20 +718,20 @@ function evaluateCandidate(
       const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
       const maxPressure =
         def.suction.pressure + rhoG * (def.suction.elevation - pumpElevation) + rhoG * setShutoff;
-      if (maxPressure > limits.designPressure) {
-        checks.push(
-          check(
-            'shutoff-pressure',
-            'error',
-            c.name,
-            s.name,
-            { maxPressure, designPressure: limits.designPressure },
-            'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)',
-          ),
-        );
-      }
+      const k = shutoffPressureCheck(c.name, s.name, maxPressure, limits.designPressure);
+      if (k !== undefined) checks.push(k);
     }
   }
+  const context = {
+    input,
+    candidate: c,
+    inCase,
+    family,
+    cases,
+    limits,
+    npshAvailableAt: (curve: SystemCurve, flow: number) => npshAvailableAt(input, curve, flow),
+  };
+  for (const k of CANDIDATE_CHECKS) checks.push(...k.run(context));
   return {
     name: c.name,
     count: c.count,
@@ -1002,52 +756,6 @@ function evaluateCandidate(
     checks: withMessages(checks, limits.units),
     passed: !checks.some((k) => k.severity === 'error'),
   };
-}
-
-/**
- * Warns when a head or efficiency fit misses the catalogue tolerance (head within 0.5 % of
- * each point, efficiency within 0.5 percentage point). The default fits always meet it, so
- * this concerns a fit the caller chose.
- */
-function curveFitChecks(c: Candidate, checks: Check[]): void {
-  const { head, efficiency } = c.pump.fits;
-  if (head.withinTolerance === false) {
-    checks.push(
-      check(
-        'curve-fit',
-        'warning',
-        c.name,
-        undefined,
-        {
-          maxResidual: head.maxResidual,
-          maxRelativeResidual: head.maxRelativeResidual,
-          tolerance: CATALOGUE_FIT_TOLERANCE.headRelative,
-        },
-        COMMON,
-        { curve: 'head', fit: fitName(head) },
-      ),
-    );
-  }
-  if (efficiency?.withinTolerance === false) {
-    checks.push(
-      check(
-        'curve-fit',
-        'warning',
-        c.name,
-        undefined,
-        {
-          maxResidual: efficiency.maxResidual,
-          tolerance: CATALOGUE_FIT_TOLERANCE.efficiency,
-        },
-        COMMON,
-        { curve: 'efficiency', fit: fitName(efficiency) },
-      ),
-    );
-  }
-}
-
-function fitName(f: FitReport): string {
-  return f.method === 'polynomial' ? `polynomial of degree ${f.degree ?? '?'}` : 'monotone cubic';
 }
 
 function sample(
@@ -1244,6 +952,7 @@ export function evaluateDesign(
         }) as Pressure);
   const limits = resolveLimits(input);
   checkLocation(input);
+  guardCheckInputs(input);
   const family = systemScenarios(
     { ...input.system, name: input.system.name ?? 'design case' },
     input.cases ?? [],
@@ -1287,11 +996,15 @@ export function evaluateDesign(
   });
   const systemChecks: Check[] = [];
   const duty = family.map((s) => dutyInCase(input, s, limits, systemChecks));
+  family.forEach((scenario, i) => {
+    const d = duty[i] as CaseDuty;
+    for (const k of CASE_CHECKS) systemChecks.push(...k.run({ input, scenario, duty: d, limits }));
+  });
   if (
     input.pumpLocation !== undefined &&
     family.some((s) => s.curve.definition.fluid.vaporPressure === undefined)
   ) {
-    systemChecks.push(check('npsh-data', 'warning', undefined, undefined, {}, COMMON));
+    systemChecks.push(npshNoVaporPressureCheck());
   }
   const evaluated = candidates.map((c) => evaluateCandidate(input, c, family, limits, profile));
   const order = evaluated

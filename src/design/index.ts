@@ -29,6 +29,8 @@ export type {
   DesignReport,
   DisplayUnits,
   EvaluateOptions,
+  IntakeInput,
+  LowFlowInput,
   NpshTerms,
   PumpLocation,
   ReportCurves,
@@ -39,6 +41,7 @@ export type {
   SampledCurve,
   Severity,
   SpeedControl,
+  SurgeInput,
   UnitSystem,
   Verdict,
 } from './types';

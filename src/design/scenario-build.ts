@@ -394,6 +394,10 @@ export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInp
     ...(designLimits === undefined ? {} : { limits: designLimits }),
     ...(parts.units === undefined ? {} : { units: parts.units }),
     ...(parts.atmosphere === undefined && parts.site === undefined ? {} : { atmosphere }),
+    liquid: fluid.fluid,
+    ...(parts.surge === undefined ? {} : { surge: parts.surge }),
+    ...(parts.lowFlow === undefined ? {} : { lowFlow: parts.lowFlow }),
+    ...(parts.intake === undefined ? {} : { intake: parts.intake }),
   };
 }
 

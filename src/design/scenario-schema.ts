@@ -43,7 +43,14 @@ import type {
   RunFrictionLaw,
   ValveCoefficient,
 } from '../system/index';
-import type { Density, DynamicViscosity, Flow, Pressure, Temperature } from '../units/index';
+import type {
+  Density,
+  DynamicViscosity,
+  Flow,
+  Pressure,
+  SpecificHeat,
+  Temperature,
+} from '../units/index';
 import { expecting, found, report, reportError } from './scenario-issues';
 import {
   choice,
@@ -472,6 +479,16 @@ const fluidSchema = v.pipe(
             viscosity: viscosity(),
             vaporPressure: opt(quantity('pressure', 'nonNegative')),
             temperature: opt(quantity('temperature')),
+            bulkModulus: opt(
+              quantity('pressure', 'positive', 'bulk modulus of the liquid, for the surge check'),
+            ),
+            specificHeat: opt(
+              quantity(
+                'specificHeat',
+                'positive',
+                'specific heat of the liquid, for the low-flow heating check',
+              ),
+            ),
           }),
         ),
         table: opt(
@@ -497,6 +514,8 @@ const fluidSchema = v.pipe(
         viscosity: { value: number; kind: 'dynamicViscosity' | 'kinematicViscosity' };
         vaporPressure?: Pressure;
         temperature?: Temperature;
+        bulkModulus?: Pressure;
+        specificHeat?: SpecificHeat;
       };
       table?: {
         name: string;
@@ -526,6 +545,8 @@ const fluidSchema = v.pipe(
             density: c.density,
             dynamicViscosity: dynamic(c.viscosity, c.density),
             ...(c.vaporPressure === undefined ? {} : { vaporPressure: c.vaporPressure }),
+            ...(c.bulkModulus === undefined ? {} : { bulkModulus: c.bulkModulus }),
+            ...(c.specificHeat === undefined ? {} : { specificHeat: c.specificHeat }),
           }),
           name: c.name,
           // A constant fluid has no temperature dependence: the temperature is for the report.
@@ -777,6 +798,52 @@ export const scenarioFields = {
       perKWh: plainNumber('price per kWh', 0),
       currency: text('currency'),
     }),
+  ),
+  surge: opt(
+    about(
+      obj({
+        closureTime: opt(
+          quantity(
+            'time',
+            'nonNegative',
+            'effective time over which the flow stops on a pump trip or valve closure; default 0 s (sudden)',
+          ),
+        ),
+      }),
+      'asks for the surge screening (needs pumpLocation, the bulk modulus and the design pressure)',
+    ),
+  ),
+  lowFlow: opt(
+    about(
+      obj({
+        minimumFlow: opt(
+          quantity(
+            'flow',
+            'positive',
+            "lowest flow one pump may run at; default the low end of the pump's allowable region",
+          ),
+        ),
+        maxTemperatureRise: opt(
+          plainNumber('largest temperature rise through the pump, in kelvins (default 8)', 0),
+        ),
+      }),
+      'asks for the low-flow heating check',
+    ),
+  ),
+  intake: opt(
+    about(
+      obj({
+        depth: opt(
+          quantity(
+            'length',
+            'positive',
+            'depth of the suction inlet below the suction surface in the design case',
+          ),
+        ),
+        diameter: opt(quantity('length', 'positive', 'suction inlet (bell) diameter')),
+      }),
+      'asks for the intake submergence check (a free-surface suction end)',
+    ),
   ),
   limits: opt(
     oneOf(

@@ -36,6 +36,8 @@ const WORDS: Partial<Record<Dimension, readonly [string, string]>> = {
   power: ['a power', '15 kW'],
   velocity: ['a velocity', '2 m/s'],
   acceleration: ['an acceleration', '9.81 m/s2'],
+  time: ['a time', '5 s'],
+  specificHeat: ['a specific heat', '4.18 kJ/(kg*K)'],
 };
 
 function words(dimension: Dimension): readonly [string, string] {

@@ -4,6 +4,8 @@
  *
  * @module
  */
+
+import type { Fluid } from '../fluids/index';
 import type {
   CataloguePoint,
   FitReport,
@@ -22,6 +24,7 @@ import type {
   Pressure,
   RotationalSpeed,
   Temperature,
+  Time,
   UnitOf,
   Velocity,
 } from '../units/index';
@@ -102,6 +105,41 @@ export interface DesignLimits {
   readonly dutyFlowTolerance?: number;
 }
 
+/**
+ * Inputs of the surge screening (check `surge`): giving this block asks for the check. The
+ * check also needs `pumpLocation`, the fluid's bulk modulus and, for the up-surge, the design
+ * pressure (`limits.designPressure`).
+ */
+export interface SurgeInput {
+  /**
+   * Effective time over which the flow stops on a pump trip or a valve closure (s), >= 0;
+   * default 0 (sudden: the full Joukowsky rise).
+   */
+  readonly closureTime?: Time;
+}
+
+/** Inputs of the low-flow heating check (`low-flow-heating`): giving this block asks for it. */
+export interface LowFlowInput {
+  /**
+   * Lowest flow one pump may run at (the minimum continuous flow the file states); default the
+   * low end of the pump's allowable region, or of its curve.
+   */
+  readonly minimumFlow?: Flow;
+  /** Largest temperature rise through the pump to accept (K), > 0; default 8 K. */
+  readonly maxTemperatureRise?: number;
+}
+
+/**
+ * The suction inlet in a free-surface intake (check `intake-submergence`): giving both asks
+ * for the check. The suction end must be a free surface (no `velocityDiameter`).
+ */
+export interface IntakeInput {
+  /** Depth of the inlet face below the suction surface in the design case (m), > 0. */
+  readonly depth?: Length;
+  /** Inlet (bell) diameter (m), > 0. */
+  readonly diameter?: Length;
+}
+
 /** Units a report is written in. */
 export type UnitSystem = 'si' | 'us';
 
@@ -135,6 +173,14 @@ export interface DesignInput {
    * `system` are absolute already: the report uses this to show each one as gauge too.
    */
   readonly atmosphere?: Pressure;
+  /** The liquid itself (its states at other temperatures), for the saturation margin. */
+  readonly liquid?: Fluid;
+  /** Surge screening on pump trip or valve closure (check `surge`). */
+  readonly surge?: SurgeInput;
+  /** Heat at the lowest flow (check `low-flow-heating`). */
+  readonly lowFlow?: LowFlowInput;
+  /** The suction inlet of a free-surface intake (check `intake-submergence`). */
+  readonly intake?: IntakeInput;
 }
 
 /** How serious a check's finding is. `error` fails the candidate (or the design). */
