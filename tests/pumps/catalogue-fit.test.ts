@@ -196,10 +196,13 @@ describe('property: the default fit honours the bounds for any monotone catalogu
         }
         expect(pump.fits.head.withinTolerance).toBe(true);
         expect(pump.fits.efficiency?.withinTolerance).toBe(true);
-        // The BEP is no lower than the best catalogue point less the tolerance.
+        // The BEP is no lower than the best catalogue point less the tolerance. The fit meets
+        // the tolerance only to its rounding and the BEP search stops within its own step, so
+        // 1e-9 (a ten-millionth of a percentage point) is allowed on top: seed 165599384
+        // gave a BEP 1.0e-12 below the bound.
         const best = Math.max(...points.map((p) => p.efficiency ?? 0));
         expect(pump.bestEfficiencyPoint?.efficiency ?? 0).toBeGreaterThanOrEqual(
-          best - CATALOGUE_FIT_TOLERANCE.efficiency - 1e-12,
+          best - CATALOGUE_FIT_TOLERANCE.efficiency - 1e-9,
         );
       }),
       { numRuns: 300 },
