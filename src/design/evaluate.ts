@@ -30,6 +30,8 @@ import {
   systemScenarios,
 } from '../system/index';
 import {
+  type Acceleration,
+  type Density,
   type Flow,
   type Length,
   type Power,
@@ -41,6 +43,7 @@ import {
 } from '../units/index';
 import { CAUTIONS } from './cautions';
 import { checkMessage } from './check-message';
+import { evaluateNetworkDesign, isNetworkDesign } from './network-design';
 import type {
   Arrangement,
   CandidateInput,
@@ -51,6 +54,7 @@ import type {
   DesignInput,
   DesignReport,
   EvaluateOptions,
+  NetworkDesignInput,
   NpshTerms,
   ReportCurves,
   ReportFluid,
@@ -71,15 +75,17 @@ export const DESIGN_DEFAULTS = {
   hoursPerYear: 8760,
 } as const;
 
-const NPSH_SOURCE =
+export const NPSH_SOURCE =
   'ANSI/HI 9.6.1 (NPSH margin by application, as summarized in the pumps module; use the edition your project names)';
-const REGION_SOURCE = 'ANSI/HI 9.6.3 (preferred operating region 70-120 % of BEP flow by default)';
-const COMMON = 'common practice';
+export const REGION_SOURCE =
+  'ANSI/HI 9.6.3 (preferred operating region 70-120 % of BEP flow by default)';
+export const COMMON = 'common practice';
 const DUTY_TOLERANCE_SOURCE =
   'limits.dutyFlowTolerance (default 2 %: system-curve uncertainty, common practice; within the flow tolerance of pump acceptance tests, ISO 9906 / ANSI/HI 14.6)';
 const SAMPLES = 61;
 
-interface Limits {
+/** The check limits with their defaults filled in. */
+export interface Limits {
   readonly units: UnitSystem;
   readonly npshMarginRatio: number;
   readonly npshMinimumMargin: number;
@@ -91,7 +97,7 @@ interface Limits {
 }
 
 /** A candidate with its defaults filled in and its per-pump view of each system. */
-interface Candidate {
+export interface Candidate {
   readonly input: CandidateInput;
   readonly name: string;
   readonly pump: PumpCurve;
@@ -115,7 +121,7 @@ interface Candidate {
  * A check without its message: `evaluateDesign` writes every message at the end, in the
  * report's units, from the values and words (see {@link withMessages}).
  */
-function check(
+export function check(
   id: string,
   severity: Check['severity'],
   candidate: string | undefined,
@@ -128,11 +134,11 @@ function check(
 }
 
 /** The checks with their messages written in a unit system. */
-function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
+export function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
   return checks.map((k) => ({ ...k, message: checkMessage(k, units) }));
 }
 
-function resolveLimits(input: DesignInput): Limits {
+export function resolveLimits(input: Pick<DesignInput, 'limits' | 'units'>): Limits {
   const l = input.limits ?? {};
   const ratio = l.npshMarginRatio ?? DESIGN_DEFAULTS.npshMarginRatio;
   if (!Number.isFinite(ratio) || ratio < 1) {
@@ -264,7 +270,7 @@ function resolveCandidate(c: CandidateInput, i: number): Candidate {
  * (each carries Q/N at the full head), N in series share the head (each adds H/N at the full
  * flow). Exact for identical pumps.
  */
-function perPump(c: Candidate, system: SystemCurve): SystemCurveLike {
+export function perPump(c: Candidate, system: SystemCurveLike): SystemCurveLike {
   const m = c.arrangement === 'series' ? c.count : 1;
   return {
     staticHead: (system.staticHead / m) as Length,
@@ -561,7 +567,7 @@ const FLOW_ROUND_OFF = 1e-9;
  * shortfall beyond `limits.dutyFlowTolerance` an error; an excess beyond it a note (a valve or
  * a trim would bring the flow down).
  */
-function dutyFlowCheck(
+export function dutyFlowCheck(
   duty: number,
   flow: number,
   candidate: string,
@@ -590,7 +596,7 @@ function dutyFlowCheck(
 }
 
 /** The operating region of a pump's share, from the pumps module's own region test. */
-function regionOf(share: PumpShare | undefined): CaseResult['region'] {
+export function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   if (share?.inPreferredRegion === undefined || share.inAllowableRegion === undefined) {
     return undefined;
   }
@@ -598,7 +604,7 @@ function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   return share.inAllowableRegion ? 'allowable' : 'outside';
 }
 
-function message(e: unknown): string {
+export function message(e: unknown): string {
   if (e instanceof HeadflowError) return e.message;
   throw e;
 }
@@ -656,6 +662,123 @@ function noPointReason(
       systemHead: system.head(max) * m,
     },
   };
+}
+
+/** Where the point checks of one candidate in one case are written, and what they need. */
+export interface PointContext {
+  readonly caseName: string;
+  readonly density: Density;
+  readonly g: Acceleration | undefined;
+  readonly limits: Limits;
+  readonly checks: Check[];
+  /** Whether NPSH is to be checked (a pump location is known): missing NPSHr data warns. */
+  readonly npshExpected: boolean;
+}
+
+/**
+ * A candidate at one pump's flow `q` on curve `pump` (at the speed it runs): head of the set,
+ * efficiency, shaft power of the set, % of BEP and region, NPSH required and the margin, with
+ * the region, NPSH and motor-overload checks. Shared by lines and networks.
+ */
+export function pointAt(
+  c: Candidate,
+  pump: PumpCurve,
+  q: number,
+  npsha: Length | undefined,
+  at: PointContext,
+) {
+  const flow = c.setFlow(q);
+  const { caseName, density, limits, checks } = at;
+  const head = c.setHead(pump.head(q as Flow));
+  const efficiency = pump.efficiency(q as Flow);
+  const shaftPower = c.count * pump.shaftPower(q as Flow, density, at.g);
+  const share = pump.shares(q as Flow)[0];
+  const percentOfBep = share?.percentOfBep;
+  const region = regionOf(share);
+  if (region === 'allowable') {
+    checks.push(
+      check(
+        'preferred-region',
+        'warning',
+        c.name,
+        caseName,
+        { percentOfBep: percentOfBep ?? 0 },
+        REGION_SOURCE,
+      ),
+    );
+  } else if (region === 'outside') {
+    checks.push(
+      check(
+        'allowable-region',
+        'error',
+        c.name,
+        caseName,
+        { percentOfBep: percentOfBep ?? 0 },
+        'ANSI/HI 9.6.3 (allowable operating region; the manufacturer states it)',
+      ),
+    );
+  }
+  const npshr =
+    pump.npshRange !== undefined && q >= pump.npshRange.min && q <= pump.npshRange.max
+      ? pump.npshRequired(q as Flow)
+      : undefined;
+  let npshRatio: number | undefined;
+  if (npsha !== undefined && npshr !== undefined) {
+    const m = npshMargin({
+      available: npsha,
+      required: npshr,
+      marginRatio: limits.npshMarginRatio,
+      minimumMargin: limits.npshMinimumMargin as Length,
+    });
+    npshRatio = m.ratio;
+    if (npsha < npshr) {
+      checks.push(
+        check(
+          'npsh-margin',
+          'error',
+          c.name,
+          caseName,
+          { npshAvailable: npsha, npshRequired: npshr, ratio: m.ratio },
+          NPSH_SOURCE,
+        ),
+      );
+    } else if (!m.ok) {
+      checks.push(
+        check(
+          'npsh-margin',
+          'warning',
+          c.name,
+          caseName,
+          {
+            npshAvailable: npsha,
+            npshRequired: npshr,
+            ratio: m.ratio,
+            requiredAvailable: m.requiredAvailable,
+          },
+          NPSH_SOURCE,
+        ),
+      );
+    }
+  } else if (at.npshExpected && npshr === undefined) {
+    checks.push(check('npsh-data', 'warning', c.name, caseName, { flow }, COMMON));
+  }
+  if (c.input.motorRating !== undefined) {
+    const perPumpPower = shaftPower / c.count;
+    const sf = c.input.serviceFactor ?? 1;
+    if (perPumpPower > c.input.motorRating * sf) {
+      checks.push(
+        check(
+          'motor-overload',
+          'error',
+          c.name,
+          caseName,
+          { shaftPower: perPumpPower, motorRating: c.input.motorRating, serviceFactor: sf },
+          'NEMA MG 1 / IEC 60034-1 (rated output)',
+        ),
+      );
+    }
+  }
+  return { head, efficiency, shaftPower, percentOfBep, region, npshr, npshRatio };
 }
 
 /** One candidate in one case: where it runs and the checks there. */
@@ -717,97 +840,17 @@ function runCase(
     return { ...empty, failure: checkMessage(k, limits.units) };
   }
   const flow = c.setFlow(q);
-  const head = c.setHead(pump.head(q as Flow));
-  const efficiency = pump.efficiency(q as Flow);
-  const shaftPower = c.count * pump.shaftPower(q as Flow, fluid.density, s.curve.definition.g);
-  const share = pump.shares(q as Flow)[0];
-  const percentOfBep = share?.percentOfBep;
-  const region = regionOf(share);
   if (c.control === 'fixed') dutyFlowCheck(input.dutyFlow, flow, c.name, s.name, limits, checks);
-  if (region === 'allowable') {
-    checks.push(
-      check(
-        'preferred-region',
-        'warning',
-        c.name,
-        s.name,
-        { percentOfBep: percentOfBep ?? 0 },
-        REGION_SOURCE,
-      ),
-    );
-  } else if (region === 'outside') {
-    checks.push(
-      check(
-        'allowable-region',
-        'error',
-        c.name,
-        s.name,
-        { percentOfBep: percentOfBep ?? 0 },
-        'ANSI/HI 9.6.3 (allowable operating region; the manufacturer states it)',
-      ),
-    );
-  }
   const npsha = npshAvailableAt(input, s.curve, flow);
-  const npshr =
-    pump.npshRange !== undefined && q >= pump.npshRange.min && q <= pump.npshRange.max
-      ? pump.npshRequired(q as Flow)
-      : undefined;
-  let npshRatio: number | undefined;
-  if (npsha !== undefined && npshr !== undefined) {
-    const m = npshMargin({
-      available: npsha,
-      required: npshr,
-      marginRatio: limits.npshMarginRatio,
-      minimumMargin: limits.npshMinimumMargin as Length,
-    });
-    npshRatio = m.ratio;
-    if (npsha < npshr) {
-      checks.push(
-        check(
-          'npsh-margin',
-          'error',
-          c.name,
-          s.name,
-          { npshAvailable: npsha, npshRequired: npshr, ratio: m.ratio },
-          NPSH_SOURCE,
-        ),
-      );
-    } else if (!m.ok) {
-      checks.push(
-        check(
-          'npsh-margin',
-          'warning',
-          c.name,
-          s.name,
-          {
-            npshAvailable: npsha,
-            npshRequired: npshr,
-            ratio: m.ratio,
-            requiredAvailable: m.requiredAvailable,
-          },
-          NPSH_SOURCE,
-        ),
-      );
-    }
-  } else if (input.pumpLocation !== undefined && npshr === undefined) {
-    checks.push(check('npsh-data', 'warning', c.name, s.name, { flow }, COMMON));
-  }
-  if (c.input.motorRating !== undefined) {
-    const perPumpPower = shaftPower / c.count;
-    const sf = c.input.serviceFactor ?? 1;
-    if (perPumpPower > c.input.motorRating * sf) {
-      checks.push(
-        check(
-          'motor-overload',
-          'error',
-          c.name,
-          s.name,
-          { shaftPower: perPumpPower, motorRating: c.input.motorRating, serviceFactor: sf },
-          'NEMA MG 1 / IEC 60034-1 (rated output)',
-        ),
-      );
-    }
-  }
+  const at = pointAt(c, pump, q, npsha, {
+    caseName: s.name,
+    density: fluid.density,
+    g: s.curve.definition.g,
+    limits,
+    checks,
+    npshExpected: input.pumpLocation !== undefined,
+  });
+  const { head, efficiency, shaftPower, percentOfBep, region, npshr, npshRatio } = at;
   const details = s.curve.details(flow as Flow);
   const drive = c.input.driveEfficiency ?? 1;
   const inputPower = shaftPower / (c.input.motorEfficiency * drive);
@@ -845,7 +888,72 @@ function evaluateCandidate(
   curveFitChecks(c, checks);
   const cases = family.map((s) => runCase(input, c, s, limits, checks));
   const design = family[0] as ScenarioCurve;
-  const density = design.curve.definition.fluid.density;
+  return finishCandidate(c, cases, checks, {
+    system: design.curve,
+    caseName: design.name,
+    density: design.curve.definition.fluid.density,
+    g: design.curve.definition.g,
+    profile,
+    energyPrice: input.energyPrice,
+    limits,
+    shutoffChecks: (setShutoff) => {
+      if (limits.designPressure === undefined) return;
+      for (const s of family) {
+        const def = s.curve.definition;
+        const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
+        const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
+        const maxPressure =
+          def.suction.pressure + rhoG * (def.suction.elevation - pumpElevation) + rhoG * setShutoff;
+        if (maxPressure > limits.designPressure) {
+          checks.push(
+            check(
+              'shutoff-pressure',
+              'error',
+              c.name,
+              s.name,
+              { maxPressure, designPressure: limits.designPressure },
+              SHUTOFF_SOURCE,
+            ),
+          );
+        }
+      }
+    },
+  });
+}
+
+/** Source of the shut-off pressure check. */
+export const SHUTOFF_SOURCE =
+  'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)';
+
+/** What {@link finishCandidate} needs of the design case. */
+export interface CandidateContext {
+  /** The system as the whole set sees it in the design case (head the set must add at a set flow). */
+  readonly system: SystemCurveLike;
+  /** Name of the design case. */
+  readonly caseName: string;
+  readonly density: Density;
+  readonly g: number | undefined;
+  readonly profile: readonly ProfileRow[];
+  readonly energyPrice: DesignInput['energyPrice'];
+  readonly limits: Limits;
+  /** Adds the shut-off pressure checks for the set's shut-off head (m). */
+  readonly shutoffChecks: (setShutoffHead: number) => void;
+}
+
+/**
+ * The rest of a candidate's evaluation once its cases are known: the motor that never
+ * overloads and the duty-only motor, the year's energy over the profile, the dead-head and
+ * shut-off checks, the pump restated. Shared by lines and networks.
+ */
+export function finishCandidate(
+  c: Candidate,
+  cases: readonly CaseResult[],
+  checks: Check[],
+  context: CandidateContext,
+): Omit<CandidateReport, 'rank'> {
+  const { density, profile, limits } = context;
+  const input = { energyPrice: context.energyPrice };
+  const design = { name: context.caseName };
   const series = c.input.motorSeries ?? 'iec';
   const fullSpeed = c.fullSpeed;
   let maxShaftPower: Power | undefined;
@@ -917,7 +1025,7 @@ function evaluateCandidate(
     }));
     const e = annualEnergy({
       pump: c.control === 'speed' ? c.pump : fullSpeed,
-      system: perPump(c, design.curve),
+      system: perPump(c, context.system),
       profile: perPumpProfile,
       density,
       motorEfficiency: c.input.motorEfficiency,
@@ -927,7 +1035,7 @@ function evaluateCandidate(
       control: c.control === 'speed' ? 'speed' : 'throttle',
       ...(input.energyPrice === undefined ? {} : { price: input.energyPrice }),
       ...(c.control === 'speed' ? { maxSpeed: c.maxSpeed } : {}),
-      ...(design.curve.definition.g === undefined ? {} : { g: design.curve.definition.g }),
+      ...(context.g === undefined ? {} : { g: context.g as Acceleration }),
     });
     energy = {
       kWh: e.totalKWh * c.count,
@@ -956,27 +1064,7 @@ function evaluateCandidate(
   checks.push(
     check('dead-head', 'warning', c.name, undefined, { shutoffHead: setShutoff }, COMMON),
   );
-  if (limits.designPressure !== undefined) {
-    for (const s of family) {
-      const def = s.curve.definition;
-      const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
-      const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
-      const maxPressure =
-        def.suction.pressure + rhoG * (def.suction.elevation - pumpElevation) + rhoG * setShutoff;
-      if (maxPressure > limits.designPressure) {
-        checks.push(
-          check(
-            'shutoff-pressure',
-            'error',
-            c.name,
-            s.name,
-            { maxPressure, designPressure: limits.designPressure },
-            'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)',
-          ),
-        );
-      }
-    }
-  }
+  context.shutoffChecks(setShutoff);
   return {
     name: c.name,
     count: c.count,
@@ -1008,7 +1096,7 @@ function evaluateCandidate(
  * each point, efficiency within 0.5 percentage point). The default fits always meet it, so
  * this concerns a fit the caller chose.
  */
-function curveFitChecks(c: Candidate, checks: Check[]): void {
+export function curveFitChecks(c: Candidate, checks: Check[]): void {
   const { head, efficiency } = c.pump.fits;
   if (head.withinTolerance === false) {
     checks.push(
@@ -1049,7 +1137,7 @@ function fitName(f: FitReport): string {
   return f.method === 'polynomial' ? `polynomial of degree ${f.degree ?? '?'}` : 'monotone cubic';
 }
 
-function sample(
+export function sample(
   name: string,
   from: number,
   to: number,
@@ -1196,6 +1284,61 @@ function curvesOf(
 }
 
 /**
+ * The candidates with their defaults filled in, checked, names unique.
+ * @throws HeadflowError `INVALID_ARGUMENT` as {@link evaluateDesign}.
+ */
+export function resolveCandidates(inputs: readonly CandidateInput[]): Candidate[] {
+  const names = new Set<string>();
+  const candidates = inputs.map((c, i) => {
+    const r = resolveCandidate(c, i);
+    if (names.has(r.name)) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `candidates[${i}].name`,
+        r.name,
+        undefined,
+        'a name no other candidate has',
+      );
+    }
+    names.add(r.name);
+    return r;
+  });
+  return candidates;
+}
+
+/**
+ * The duty profile with its default (the duty flow all year), checked.
+ * @throws HeadflowError `INVALID_ARGUMENT` for a negative flow or hours outside 0 to 8784.
+ */
+export function resolveProfile(
+  given: readonly ProfileRow[] | undefined,
+  dutyFlow: number,
+): readonly ProfileRow[] {
+  const profile = given ?? [{ flow: dutyFlow as Flow, hours: DESIGN_DEFAULTS.hoursPerYear }];
+  profile.forEach((row, i) => {
+    if (!Number.isFinite(row.flow) || row.flow < 0) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `profile[${i}].flow`,
+        row.flow,
+        'm3/s',
+        'a finite flow >= 0',
+      );
+    }
+    if (!Number.isFinite(row.hours) || row.hours < 0 || row.hours > 8784) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `profile[${i}].hours`,
+        row.hours,
+        'h',
+        '0 to 8784 hours',
+      );
+    }
+  });
+  return profile;
+}
+
+/**
  * Evaluates a design: for every operating case, the head the duty needs; for every candidate
  * pump set and case, where it runs (full speed, or the speed a drive needs for the duty flow),
  * its efficiency, shaft power, % of BEP flow and region, NPSH available and required; the
@@ -1222,9 +1365,12 @@ function curvesOf(
  * ```
  */
 export function evaluateDesign(
-  input: DesignInput,
+  input: DesignInput | NetworkDesignInput,
   options: EvaluateOptions | null = {},
 ): DesignReport {
+  // --- network hook: a design whose system is a network goes to network-design.ts ---
+  if (isNetworkDesign(input)) return evaluateNetworkDesign(input, options);
+  // --- end of network hook ---
   const o = guardOptions<EvaluateOptions>('options', options);
   const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
   checkPositive('dutyFlow', input.dutyFlow, 'm3/s');
@@ -1246,43 +1392,8 @@ export function evaluateDesign(
     { ...input.system, name: input.system.name ?? 'design case' },
     input.cases ?? [],
   );
-  const candidateInputs = input.candidates ?? [];
-  const names = new Set<string>();
-  const candidates = candidateInputs.map((c, i) => {
-    const r = resolveCandidate(c, i);
-    if (names.has(r.name)) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `candidates[${i}].name`,
-        r.name,
-        undefined,
-        'a name no other candidate has',
-      );
-    }
-    names.add(r.name);
-    return r;
-  });
-  const profile = input.profile ?? [{ flow: input.dutyFlow, hours: DESIGN_DEFAULTS.hoursPerYear }];
-  profile.forEach((row, i) => {
-    if (!Number.isFinite(row.flow) || row.flow < 0) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `profile[${i}].flow`,
-        row.flow,
-        'm3/s',
-        'a finite flow >= 0',
-      );
-    }
-    if (!Number.isFinite(row.hours) || row.hours < 0 || row.hours > 8784) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `profile[${i}].hours`,
-        row.hours,
-        'h',
-        '0 to 8784 hours',
-      );
-    }
-  });
+  const candidates = resolveCandidates(input.candidates ?? []);
+  const profile = resolveProfile(input.profile, input.dutyFlow);
   const systemChecks: Check[] = [];
   const duty = family.map((s) => dutyInCase(input, s, limits, systemChecks));
   if (

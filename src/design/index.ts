@@ -7,8 +7,10 @@
  */
 export { CAUTIONS } from './cautions';
 export { checkMessage } from './check-message';
+export { SERVICE_SOURCE } from './checks/service-pressure';
 export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
+export { MAX_SEARCH_SOLVES } from './network-design';
 export {
   type ReadScenarioOptions,
   readScenario,
@@ -29,6 +31,11 @@ export type {
   DesignReport,
   DisplayUnits,
   EvaluateOptions,
+  LinkRow,
+  NetworkDesignInput,
+  NetworkLayout,
+  NetworkTables,
+  NodeRow,
   NpshTerms,
   PumpLocation,
   ReportCurves,
@@ -37,6 +44,7 @@ export type {
   RunFitting,
   RunInputSummary,
   SampledCurve,
+  ServicePressure,
   Severity,
   SpeedControl,
   UnitSystem,

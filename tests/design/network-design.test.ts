@@ -1,0 +1,264 @@
+import { describe, expect, it } from 'vitest';
+import { design, fastPump, slowPump } from '../../docs/examples/irrigation-lift';
+import { type DesignReport, evaluateDesign, type NetworkDesignInput } from '../../src/design/index';
+import {
+  type NetworkCase,
+  type NetworkDefinition,
+  type NetworkLink,
+  prepareNetwork,
+} from '../../src/network/index';
+import { type PipeRunInput, systemScenarios } from '../../src/system/index';
+import {
+  type Flow,
+  type Length,
+  type Pressure,
+  q,
+  STANDARD_ATMOSPHERE,
+  STANDARD_GRAVITY,
+} from '../../src/units';
+import { expectHeadflowError, expectRelative } from '../helpers/expect';
+
+// The irrigation line of docs/examples/irrigation-lift.ts given as a network: the canal, the
+// pump's suction and discharge flanges, the hillside tank; the same runs, cases and pumps.
+const [suctionRun, main] = design.system.runs as readonly PipeRunInput[];
+const network: NetworkDefinition = {
+  name: 'canal to hillside tank',
+  fluid: design.system.fluid,
+  nodes: [
+    { id: 'canal', elevation: q(0, 'm'), surface: {} },
+    { id: 'pump in', elevation: q(1.5, 'm') },
+    { id: 'pump out', elevation: q(1.5, 'm') },
+    { id: 'tank', elevation: q(42, 'm'), surface: {} },
+  ],
+  links: [
+    { id: 'suction', from: 'canal', to: 'pump in', run: suctionRun as PipeRunInput },
+    { id: 'pump', from: 'pump in', to: 'pump out', pump: fastPump },
+    { id: 'rising main', from: 'pump out', to: 'tank', run: main as PipeRunInput },
+  ],
+};
+const cases: NetworkCase[] = [
+  { name: 'normal canal level' },
+  { name: 'dry season, low canal', levels: { canal: q(-1.2, 'm') } },
+  { name: 'dry season, aged main', levels: { canal: q(-1.2, 'm') }, aged: true },
+];
+const asNetwork: NetworkDesignInput = {
+  name: design.name,
+  fluidName: 'water',
+  network,
+  pumpLink: 'pump',
+  cases,
+  dutyFlow: design.dutyFlow,
+  pumpElevation: q(1.5, 'm'),
+  ...(design.candidates === undefined ? {} : { candidates: design.candidates }),
+  ...(design.profile === undefined ? {} : { profile: design.profile }),
+  ...(design.energyPrice === undefined ? {} : { energyPrice: design.energyPrice }),
+};
+
+const line = evaluateDesign(design);
+const net = evaluateDesign(asNetwork, { curves: true });
+
+describe('the whole job on a network', () => {
+  it('a line given as a network: the same duty heads (1e-6 relative)', () => {
+    expect(net.duty.map((d) => d.case)).toEqual(line.duty.map((d) => d.case));
+    net.duty.forEach((d, i) => {
+      const l = line.duty[i];
+      expectRelative(d.head, l?.head ?? 0, 1e-6, d.case);
+      expectRelative(d.staticHead, l?.staticHead ?? 0, 1e-6, d.case);
+      expectRelative(d.npshAvailable ?? 0, l?.npshAvailable ?? 0, 1e-6, d.case);
+    });
+  });
+
+  it('a line given as a network: the same operating points, speeds, NPSHa and energy', () => {
+    for (const c of line.candidates) {
+      const n = net.candidates.find((k) => k.name === c.name);
+      expect(n?.passed).toBe(c.passed);
+      c.cases.forEach((r, i) => {
+        const m = n?.cases[i];
+        expectRelative(m?.flow ?? 0, r.flow ?? 0, 1e-6, `${c.name} ${r.case} flow`);
+        expectRelative(m?.head ?? 0, r.head ?? 0, 1e-6, `${c.name} ${r.case} head`);
+        expectRelative(m?.speed ?? 0, r.speed ?? 0, 1e-6, `${c.name} ${r.case} speed`);
+        expectRelative(
+          m?.npshAvailable ?? 0,
+          r.npshAvailable ?? 0,
+          1e-6,
+          `${c.name} ${r.case} NPSHa`,
+        );
+        expectRelative(m?.percentOfBep ?? 0, r.percentOfBep ?? 0, 1e-6);
+      });
+      expectRelative(n?.energy?.kWh ?? 0, c.energy?.kWh ?? 0, 1e-6, `${c.name} energy`);
+      expect(n?.motor?.rating).toBe(c.motor?.rating);
+    }
+    expect(net.verdict).toEqual(line.verdict);
+  });
+
+  it('agrees with solving the network by hand at the reported operating point', () => {
+    const prepared = prepareNetwork(network);
+    const fast = net.candidates.find((c) => c.name === 'fast pump, fixed');
+    fast?.cases.forEach((r, i) => {
+      const sol = prepared.solve({ ...cases[i], pumps: { pump: fastPump } });
+      const link = sol.links['pump'];
+      expectRelative(r.flow ?? 0, link?.flow ?? 0, 1e-12, r.case);
+      expectRelative(r.head ?? 0, fastPump.head((link?.flow ?? 0) as Flow), 1e-9, r.case);
+      // NPSH available from the solved suction pressure: (p - pv)/(rho g) + z_node - z_eye.
+      const fluid = network.fluid;
+      const p = sol.nodes['pump in']?.pressure ?? 0;
+      const npsha = (p - (fluid.vaporPressure ?? 0)) / (fluid.density * STANDARD_GRAVITY);
+      expectRelative(r.npshAvailable ?? 0, npsha, 1e-12, r.case);
+    });
+    const slow = net.candidates.find((c) => c.name === 'slow pump, drive');
+    slow?.cases.forEach((r, i) => {
+      const sol = prepared.solve({
+        ...cases[i],
+        pumps: { pump: slowPump },
+        speeds: { pump: r.speed ?? slowPump.speed },
+      });
+      expectRelative(sol.links['pump']?.flow ?? 0, design.dutyFlow, 1e-9, r.case);
+    });
+  });
+
+  it('gives node and link tables per case and the system curve seen by the pump link', () => {
+    const t = net.duty[0]?.network?.tables;
+    expect(t?.nodes.map((n) => n.id)).toEqual(['canal', 'pump in', 'pump out', 'tank']);
+    const main = t?.links.find((l) => l.id === 'rising main');
+    expectRelative(main?.flow ?? 0, design.dutyFlow, 1e-9);
+    expect(main?.reynolds).toBeGreaterThan(1e4);
+    const sys = net.curves?.systems[0];
+    expect(sys?.flows.length).toBeGreaterThan(20);
+    // Every sampled point lies on the line's system curve (system module, independent path).
+    const lineCurve = systemScenarios(design.system, design.cases ?? [])[0]?.curve;
+    sys?.flows.forEach((f, i) => {
+      expectRelative(lineCurve?.head(f as Flow) ?? 0, sys.values[i] ?? 0, 1e-6, `at ${f} m3/s`);
+    });
+  });
+});
+
+/** A source of (almost exactly) fixed head: 1e-7 of its head is lost at 1 m3/s. */
+function fixedHead(h: number) {
+  const cap = 1e7;
+  return {
+    head: (x: Flow) => (h * (1 - x / cap)) as Length,
+    flowRange: { min: 0 as Flow, max: cap as Flow },
+  };
+}
+
+// An invented building: a booster from a break tank feeds a riser with three floors; the top
+// floor needs at least 1.5 bar gauge.
+const fixture = (id: string, floor: number) => ({
+  id,
+  elevation: q(3 * floor + 1, 'm'),
+  outlet: { coefficient: 2.5e-5, exponent: 0.5 },
+});
+const riser = (length: number, mm: number): PipeRunInput => ({
+  length: q(length, 'm'),
+  insideDiameter: q(mm, 'mm'),
+  material: 'commercial-steel',
+});
+const building: NetworkDefinition = {
+  fluid: design.system.fluid,
+  nodes: [
+    { id: 'break tank', elevation: q(0.5, 'm'), surface: {} },
+    { id: 'in', elevation: q(0, 'm') },
+    { id: 'out', elevation: q(0, 'm') },
+    { id: 'f1', elevation: q(3, 'm') },
+    { id: 'f2', elevation: q(6, 'm') },
+    { id: 'f3', elevation: q(9, 'm') },
+    fixture('tap 1', 1),
+    fixture('tap 2', 2),
+    fixture('tap 3', 3),
+  ],
+  links: [
+    { id: 'suction', from: 'break tank', to: 'in', run: riser(3, 52.5) },
+    { id: 'booster', from: 'in', to: 'out', run: riser(0.5, 52.5) } as NetworkLink,
+    { id: 'r1', from: 'out', to: 'f1', run: riser(8, 40.9) },
+    { id: 'r2', from: 'f1', to: 'f2', run: riser(3, 35.1) },
+    { id: 'r3', from: 'f2', to: 'f3', run: riser(3, 26.6) },
+    { id: 'b1', from: 'f1', to: 'tap 1', run: riser(6, 20.9) },
+    { id: 'b2', from: 'f2', to: 'tap 2', run: riser(6, 20.9) },
+    { id: 'b3', from: 'f3', to: 'tap 3', run: riser(6, 20.9) },
+  ],
+};
+const bar = (x: number) => (STANDARD_ATMOSPHERE + x * 1e5) as Pressure;
+
+describe('service pressures as the duty', () => {
+  const input: NetworkDesignInput = {
+    name: 'booster',
+    network: building,
+    pumpLink: 'booster',
+    service: [
+      { node: 'tap 3', minPressure: bar(1.5) },
+      { node: 'tap 2', minPressure: bar(1.5) },
+    ],
+  };
+  const report: DesignReport = evaluateDesign(input);
+
+  it('the duty head is the least head meeting every minimum (met there, not 1 mm below)', () => {
+    const d = report.duty[0];
+    const head = d?.head ?? 0;
+    const prepared = prepareNetwork({
+      ...building,
+      links: building.links.map((l) =>
+        l.id === 'booster' ? { id: 'booster', from: 'in', to: 'out', pump: fixedHead(head) } : l,
+      ),
+    });
+    const at = prepared.solve();
+    expect((at.nodes['tap 3']?.pressure ?? 0) - bar(1.5)).toBeGreaterThanOrEqual(-1e-3);
+    expect(at.nodes['tap 2']?.pressure ?? 0).toBeGreaterThan(bar(1.5));
+    const below = prepared.solve({ pumps: { booster: fixedHead(head - 1e-3) } });
+    expect(below.nodes['tap 3']?.pressure ?? 0).toBeLessThan(bar(1.5));
+    expectRelative(d?.network?.dutyFlow ?? 0, at.links['booster']?.flow ?? 0, 1e-6);
+    const row = d?.network?.tables.nodes.find((n) => n.id === 'tap 3');
+    expect(row?.minPressure).toBe(bar(1.5));
+    expect(row?.shortfall).toBeUndefined();
+  });
+
+  it('a pump too weak fails with service-pressure checks giving each shortfall', () => {
+    const weak = evaluateDesign({
+      ...input,
+      candidates: [{ name: 'small', pump: slowPump.atSpeed(q(700, 'rpm')), motorEfficiency: 0.9 }],
+    });
+    const c = weak.candidates[0];
+    const service = c?.checks.filter((k) => k.id === 'service-pressure') ?? [];
+    expect(c?.passed).toBe(false);
+    expect(service.length).toBeGreaterThan(0);
+    for (const k of service) {
+      expect(k.severity).toBe('error');
+      expectRelative(
+        k.values['shortfall'] ?? 0,
+        (k.values['minPressure'] ?? 0) - (k.values['pressure'] ?? 0),
+        1e-12,
+      );
+      expect(k.message).toContain(k.words['node'] ?? '?');
+    }
+  });
+
+  it('refuses with codes and paths', () => {
+    const e1 = expectHeadflowError(
+      () => evaluateDesign({ ...input, pumpLink: 'nope' }),
+      'INVALID_ARGUMENT',
+    );
+    expect(e1.parameter).toBe('pumpLink');
+    const { service: _s, ...none } = input;
+    expect(expectHeadflowError(() => evaluateDesign(none), 'INVALID_ARGUMENT').parameter).toBe(
+      'dutyFlow',
+    );
+    expect(
+      expectHeadflowError(
+        () => evaluateDesign({ ...input, dutyFlow: q(1, 'L/s') }),
+        'INVALID_ARGUMENT',
+      ).parameter,
+    ).toBe('service');
+    expect(
+      expectHeadflowError(
+        () => evaluateDesign({ ...input, service: [{ node: 'break tank', minPressure: bar(1) }] }),
+        'INVALID_ARGUMENT',
+      ).parameter,
+    ).toBe('service[0].node');
+    expect(
+      expectHeadflowError(
+        () =>
+          evaluateDesign({ ...input, service: [{ node: 'tap 1', minPressure: -1 as Pressure }] }),
+        'INVALID_ARGUMENT',
+      ).parameter,
+    ).toBe('service[0].minPressure');
+  });
+});
