@@ -301,6 +301,11 @@ export async function runCli(
     const file = args.file as string;
     const design = engine.readScenario(await readText(io, file), file);
     if (args.command === 'select') {
+      if ('network' in design) {
+        throw new InputError(
+          `${file} describes a network; select ranks catalogue pumps for the line form. Give the network's candidates in the file and run evaluate.`,
+        );
+      }
       const path = args.catalogue as string;
       const catalogue = engine.readCatalogue(await readText(io, path), path);
       const selection = engine.select(design, catalogue);

@@ -10,9 +10,10 @@ export { checkMessage } from './check-message';
 export { SERVICE_SOURCE } from './checks/service-pressure';
 export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
-export { MAX_SEARCH_SOLVES } from './network-design';
+export { isNetworkDesign, MAX_SEARCH_SOLVES } from './network-design';
 export {
   type ReadScenarioOptions,
+  readDesignFile,
   readScenario,
   SCENARIO_FORMAT,
   ScenarioFileError,

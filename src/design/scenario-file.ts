@@ -12,7 +12,7 @@ import { HeadflowError } from '../errors';
 import { assembleDesign } from './scenario-build';
 import { ScenarioFileError, type ScenarioIssue, scenarioIssues } from './scenario-issues';
 import { SCENARIO_FORMAT, scenarioObject } from './scenario-schema';
-import type { DesignInput } from './types';
+import type { DesignInput, NetworkDesignInput } from './types';
 
 export { SCENARIO_FORMAT };
 
@@ -27,7 +27,7 @@ export { SCENARIO_FORMAT };
  */
 export const scenarioSchema = v.pipe(
   scenarioObject,
-  v.rawTransform<v.InferOutput<typeof scenarioObject>, DesignInput>(
+  v.rawTransform<v.InferOutput<typeof scenarioObject>, DesignInput | NetworkDesignInput>(
     (ctx) => assembleDesign(ctx, ctx.dataset.value) ?? ctx.NEVER,
   ),
 );
@@ -91,6 +91,32 @@ function parseJson(text: string, source: string | undefined): unknown {
  * ```
  */
 export function readScenario(json: unknown, options: ReadScenarioOptions = {}): DesignInput {
+  const design = readDesignFile(json, options);
+  if ('network' in design) {
+    throw new HeadflowError(
+      'INVALID_ARGUMENT',
+      `${options.source ?? 'the scenario'} describes a network (nodes and links): read it with readDesignFile(), which returns a NetworkDesignInput for the network form.`,
+      { parameter: 'nodes', allowed: 'a line-form scenario (suction, discharge, line)' },
+    );
+  }
+  return design;
+}
+
+/**
+ * Reads a scenario file of either form: the line form (`suction`, `discharge`, `line`) into a
+ * {@link DesignInput}, the network form (`nodes`, `links`) into a {@link NetworkDesignInput};
+ * `evaluateDesign` takes both. Errors as {@link readScenario}.
+ *
+ * @example
+ * ```ts
+ * const design = readDesignFile(readFileSync('booster.json', 'utf8'), { source: 'booster.json' });
+ * const report = evaluateDesign(design);
+ * ```
+ */
+export function readDesignFile(
+  json: unknown,
+  options: ReadScenarioOptions = {},
+): DesignInput | NetworkDesignInput {
   const value = typeof json === 'string' ? parseJson(json, options.source) : json;
   const result = v.safeParse(scenarioSchema, value);
   if (result.success) return result.output;
