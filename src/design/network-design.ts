@@ -537,6 +537,7 @@ function tables(
 
 /** The node pressure checks of a solution: below the vapour pressure, below the atmosphere. */
 function pressureChecks(
+  nodes: ReadonlyMap<string, NetworkNode>,
   sol: NetworkSolution,
   ctx: CaseContext,
   candidate: string | undefined,
@@ -558,6 +559,10 @@ function pressureChecks(
   }
   for (const id of sol.belowAtmosphere) {
     if (sol.belowVaporPressure.includes(id)) continue;
+    // A surface holds its own pressure; below the atmosphere by round-off is not a finding.
+    const node = nodes.get(id);
+    const p = sol.nodes[id]?.pressure ?? Number.NaN;
+    if ((node !== undefined && 'surface' in node) || p >= ctx.atmosphere * (1 - 1e-9)) continue;
     checks.push(
       check(
         'node-below-atmosphere',
@@ -599,7 +604,7 @@ function dutyInCase(
   checks: Check[],
 ): CaseDuty {
   const sol = d.solution;
-  pressureChecks(sol, ctx, undefined, checks);
+  pressureChecks(parts.nodes, sol, ctx, undefined, checks);
   const from = sol.nodes[parts.from];
   const to = sol.nodes[parts.to];
   const fromNode = parts.nodes.get(parts.from);
@@ -723,7 +728,7 @@ function runCase(
     npshExpected: true,
   });
   serviceChecks(parts.service, sol, parts.atmosphere, c.name, ctx.name, checks);
-  pressureChecks(sol, ctx, c.name, checks);
+  pressureChecks(parts.nodes, sol, ctx, c.name, checks);
   const drive = c.input.driveEfficiency ?? 1;
   const inputPower = at.shaftPower / (c.input.motorEfficiency * drive);
   const velocities: { run: string; velocity: Velocity }[] = [];

@@ -10,6 +10,7 @@
 import type { FluidState } from '../fluids/index';
 import {
   type ControlValve,
+  type HeadRiseCurve,
   type NetworkCase,
   type NetworkDefinition,
   type NetworkLink,
@@ -34,11 +35,10 @@ import type { ScenarioParts } from './scenario-schema';
 import type { FilePressure } from './scenario-values';
 import type { NetworkDesignInput, ServicePressure } from './types';
 
-/** A run that holds the pump link's place until the candidates take it. */
-const PLACEHOLDER_RUN = {
-  length: 0 as Length,
-  insideDiameter: 1 as Length,
-  roughness: 0 as Length,
+/** A head rise that holds the pump link's place until each candidate takes it (1 m at no flow). */
+const PLACEHOLDER_PUMP: HeadRiseCurve = {
+  head: (q: Flow) => (1 - q) as Length,
+  flowRange: { min: 0 as Flow, max: 1 as Flow },
 };
 
 /** A pressure of the file as absolute (a gauge reading plus the atmosphere). */
@@ -182,7 +182,7 @@ export function assembleNetwork(
       }
       pumpLink = l.id;
       // The candidates replace this placeholder.
-      links.push({ ...base, run: PLACEHOLDER_RUN });
+      links.push({ ...base, pump: PLACEHOLDER_PUMP });
     } else if (l.valve !== undefined) {
       const v = l.valve;
       const setting =
