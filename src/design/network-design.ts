@@ -345,7 +345,22 @@ function caseContext(parts: Parts, k: NetworkCase, name: string): CaseContext {
   });
   const from = closed.nodes[parts.from];
   const to = closed.nodes[parts.to];
-  const staticHead = (to?.head ?? 0) - (from?.head ?? 0);
+  let staticHead = (to?.head ?? 0) - (from?.head ?? 0);
+  if (from?.isolated === true || to?.isolated === true) {
+    // A check valve or dead end beyond the pump leaves its outlet without a head: the head
+    // before any flow passes is where the flow through the link starts (to 1e-12 of its scale).
+    const start = 1e-14 * parts.cap;
+    staticHead = leastMeeting(
+      (h) => {
+        const sol = solveWith(parts, { operatingCase: k } as CaseContext, source(h, parts.cap));
+        return { value: (sol.links[parts.pumpLink]?.flow ?? 0) - start, at: sol };
+      },
+      1e-6,
+      Math.max(1, Math.abs(staticHead)),
+      0,
+      () => argumentError('INVALID_ARGUMENT', 'pumpLink', parts.pumpLink, undefined, 'a link flow can pass'),
+    ).x;
+  }
   return {
     name,
     operatingCase: k,
