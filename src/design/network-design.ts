@@ -358,7 +358,14 @@ function caseContext(parts: Parts, k: NetworkCase, name: string): CaseContext {
       1e-6,
       Math.max(1, Math.abs(staticHead)),
       0,
-      () => argumentError('INVALID_ARGUMENT', 'pumpLink', parts.pumpLink, undefined, 'a link flow can pass'),
+      () =>
+        argumentError(
+          'INVALID_ARGUMENT',
+          'pumpLink',
+          parts.pumpLink,
+          undefined,
+          'a link flow can pass',
+        ),
     ).x;
   }
   return {

@@ -27,9 +27,9 @@ import {
   type Temperature,
 } from '../units/index';
 import { fileMessage, found, type IssueSink, report, reportError } from './scenario-issues';
+import { assembleNetwork } from './scenario-network';
 import type { FileFluid, ScenarioParts } from './scenario-schema';
 import type { FilePressure } from './scenario-values';
-import { assembleNetwork } from './scenario-network';
 import type { DesignInput, DesignLimits, NetworkDesignInput } from './types';
 
 type Path = readonly (string | number)[];

@@ -9,13 +9,13 @@
  */
 import type { FluidState } from '../fluids/index';
 import {
+  applyNetworkCase,
   type ControlValve,
   type HeadRiseCurve,
   type NetworkCase,
   type NetworkDefinition,
   type NetworkLink,
   type NetworkNode,
-  applyNetworkCase,
   outletCoefficient,
   prepareNetwork,
 } from '../network/index';
@@ -130,10 +130,8 @@ export function assembleNetwork(
     } else if (n.outlet !== undefined) {
       const o = n.outlet;
       const gauge = gaugeOf(o.ratedPressure, atmosphere);
-      const k = attempt(
-        counting,
-        ['nodes', i, 'outlet', 'ratedPressure'],
-        () => outletCoefficient(o.ratedFlow, gauge as Pressure, o.exponent ?? 0.5),
+      const k = attempt(counting, ['nodes', i, 'outlet', 'ratedPressure'], () =>
+        outletCoefficient(o.ratedFlow, gauge as Pressure, o.exponent ?? 0.5),
       );
       nodes.push({
         id: n.id,

@@ -732,7 +732,11 @@ const networkNode = v.pipe(
     obj(
       {
         id: text('node id'),
-        elevation: quantity('length', 'any', 'elevation above the datum (of the liquid surface, for a surface)'),
+        elevation: quantity(
+          'length',
+          'any',
+          'elevation above the datum (of the liquid surface, for a surface)',
+        ),
         demand: opt(quantity('flow', 'any', 'flow drawn off at a junction (negative: fed in)')),
         surface: opt(
           oneOf(
@@ -777,7 +781,9 @@ const controlValve = obj(
     ] as const),
     setting: v.union(
       [quantity('flow', 'positive'), pressure('gauge', 'held pressure')],
-      expecting('a flow (flow-limiting) or a pressure (pressure-reducing, -sustaining) with its unit'),
+      expecting(
+        'a flow (flow-limiting) or a pressure (pressure-reducing, -sustaining) with its unit',
+      ),
     ),
     diameter: quantity('length', 'positive', 'diameter the wide-open K refers to'),
     openK: plainNumber('K when wide open', 0),
@@ -855,7 +861,11 @@ export const scenarioFields = {
     ),
   ),
   pumpElevation: opt(
-    quantity('length', 'any', 'network form: elevation of the impeller eye (default the suction node)'),
+    quantity(
+      'length',
+      'any',
+      'network form: elevation of the impeller eye (default the suction node)',
+    ),
   ),
   cases: opt(list(operatingCase, 'operating cases')),
   duty: about(
@@ -923,10 +933,7 @@ export const scenarioFields = {
 export const scenarioObject = v.pipe(
   obj(scenarioFields, 'a scenario'),
   v.metadata({
-    oneOf: [
-      { required: ['suction', 'discharge', 'line'] },
-      { required: ['nodes', 'links'] },
-    ],
+    oneOf: [{ required: ['suction', 'discharge', 'line'] }, { required: ['nodes', 'links'] }],
   }),
 );
 

@@ -8,7 +8,14 @@
  */
 import type { DesignReport, DisplayUnits, NetworkTables } from '../design/core';
 import type { Say } from '../design/say';
-import { type Dimension, type Length, type Pressure, type Quantity, to, type UnitOf } from '../units/index';
+import {
+  type Dimension,
+  type Length,
+  type Pressure,
+  type Quantity,
+  to,
+  type UnitOf,
+} from '../units/index';
 import type { Block, Column } from './format-document';
 import { DASH, formatFixed, formatGrouped, formatIn } from './format-values';
 
@@ -171,7 +178,8 @@ export function networkJson(t: NetworkTables, atmosphere: number, u: DisplayUnit
       velocity: quantity(l.velocity, u.velocity),
       headLoss: quantity(l.headLoss, u.head),
       reynolds: l.reynolds === undefined ? null : Number(l.reynolds.toPrecision(6)),
-      frictionFactor: l.frictionFactor === undefined ? null : Number(l.frictionFactor.toPrecision(6)),
+      frictionFactor:
+        l.frictionFactor === undefined ? null : Number(l.frictionFactor.toPrecision(6)),
     })),
   };
 }

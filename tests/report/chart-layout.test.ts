@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { XMLParser } from 'fast-xml-parser';
 import { describe, expect, it } from 'vitest';
-import { evaluateDesign, readScenario } from '../../src/design/index';
+import { evaluateDesign, readDesignFile, readScenario } from '../../src/design/index';
 import { chartSpecFromReport, renderChart } from '../../src/report/index';
 import { scenarioExampleFiles } from '../helpers/examples';
 import { REPORT } from './fixture';
@@ -192,7 +192,7 @@ describe('the chart test itself', () => {
 describe('no label overlaps, leaves the drawing or is cut short', () => {
   const files = scenarioExampleFiles();
   for (const file of files) {
-    const report = evaluateDesign(readScenario(readFileSync(join(DIR, file), 'utf8')), {
+    const report = evaluateDesign(readDesignFile(readFileSync(join(DIR, file), 'utf8')), {
       curves: true,
     });
     for (const units of ['si', 'us'] as const) {
