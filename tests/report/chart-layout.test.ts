@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { XMLParser } from 'fast-xml-parser';
 import { describe, expect, it } from 'vitest';
-import { evaluateDesign, readDesignFile, readScenario } from '../../src/design/index';
+import { evaluateDesign, readDesignFile } from '../../src/design/index';
 import { chartSpecFromReport, renderChart } from '../../src/report/index';
 import { scenarioExampleFiles } from '../helpers/examples';
 import { REPORT } from './fixture';
