@@ -20,6 +20,7 @@ import {
   renderHtml,
   renderJson,
   renderMarkdown,
+  renderSchematic,
   renderSelection,
   renderText,
 } from '../report/index';
@@ -42,6 +43,8 @@ export interface Engine {
     summary?: boolean,
   ): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
+  /** The schematic SVG of a network report. */
+  schematic(report: DesignReport, units: UnitSystem | undefined): string;
   readCatalogue(json: string, source: string): PumpCatalogue;
   select(design: DesignInput, catalogue: PumpCatalogue): Selection;
   renderSelection(
@@ -72,6 +75,7 @@ export const libraryEngine: Engine = {
     return renderText(report, options);
   },
   chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),
+  schematic: (report, units) => renderSchematic(report, unitsOption(units)),
   readCatalogue: (json, source) => readCatalogue(json, { source }),
   select: (design, catalogue) => selectPumps(design, catalogue),
   renderSelection: (selection, format, units) =>

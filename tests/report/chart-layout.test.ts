@@ -11,7 +11,7 @@ import fc from 'fast-check';
 import { XMLParser } from 'fast-xml-parser';
 import { describe, expect, it } from 'vitest';
 import { evaluateDesign, readDesignFile } from '../../src/design/index';
-import { chartSpecFromReport, renderChart } from '../../src/report/index';
+import { chartSpecFromReport, renderChart, renderSchematic } from '../../src/report/index';
 import { scenarioExampleFiles } from '../helpers/examples';
 import { REPORT } from './fixture';
 
@@ -244,4 +244,30 @@ describe('no label overlaps, leaves the drawing or is cut short', () => {
       { numRuns: 25 },
     );
   });
+});
+
+describe("the network schematic's labels do not overlap, leave the drawing or get cut short", () => {
+  for (const file of scenarioExampleFiles()) {
+    const design = readDesignFile(readFileSync(join(DIR, file), 'utf8'));
+    if (!('network' in design)) continue;
+    const report = evaluateDesign(design);
+    for (const units of ['si', 'us'] as const) {
+      for (const width of [900, 600]) {
+        for (const d of report.duty) {
+          it(`${file}, ${d.case}, ${units}, ${width} px wide`, () => {
+            const svg = renderSchematic(report, { units, width, case: d.case });
+            expect(problems(svg)).toEqual([]);
+            // Every node and link is labelled: in the drawing, or by number in the key.
+            const texts = measure(svg).texts.map((t) => t.text);
+            for (const n of report.network?.nodes ?? []) {
+              expect(
+                texts.some((t) => t.includes(`${n.id}: `)),
+                n.id,
+              ).toBe(true);
+            }
+          });
+        }
+      }
+    }
+  }
 });
