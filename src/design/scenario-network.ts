@@ -7,6 +7,7 @@
  *
  * @module
  */
+import { HeadflowError } from '../errors';
 import type { FluidState } from '../fluids/index';
 import {
   applyNetworkCase,
@@ -30,7 +31,7 @@ import {
   state,
   uniqueNames,
 } from './scenario-build';
-import { type IssueSink, report } from './scenario-issues';
+import { fileMessage, type IssueSink, report } from './scenario-issues';
 import type { ScenarioParts } from './scenario-schema';
 import type { FilePressure } from './scenario-values';
 import type { NetworkDesignInput, ServicePressure } from './types';
@@ -307,7 +308,14 @@ export function assembleNetwork(
   };
   attempt(counting, [], () => prepareNetwork(network), true);
   cases.forEach((c, i) => {
-    attempt(counting, ['cases', i], () => applyNetworkCase(network, c), true);
+    try {
+      applyNetworkCase(network, c);
+    } catch (e) {
+      if (!(e instanceof HeadflowError)) throw e;
+      // `operatingCase.demands.attic` is the file's `cases[i].demands.attic`.
+      const tail = (e.parameter ?? '').split('.').slice(1);
+      report(counting, e.code, fileMessage(e), ['cases', i, ...tail]);
+    }
   });
   if (problems > 0) return undefined;
   return {

@@ -95,3 +95,11 @@ describe('the network form of a scenario file', () => {
     }
   });
 });
+
+describe('network cases in a file', () => {
+  it('reports an id the network does not hold at its path in the case', () => {
+    const ring = JSON.parse(readFileSync(join(EXAMPLES_DIR, 'ring-main.json'), 'utf8'));
+    ring.cases[2].demands.attic = '1 L/s';
+    expect(paths(ring)).toEqual(['cases[2].demands.attic']);
+  });
+});
