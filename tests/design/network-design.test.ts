@@ -262,3 +262,61 @@ describe('service pressures as the duty', () => {
     ).toBe('service[0].minPressure');
   });
 });
+
+describe('node pressure checks of a network', () => {
+  // A suction line over a crest (invented): the crest's pressure is the well's less its height
+  // and the losses, so a high crest falls below the atmosphere, a higher one below boiling.
+  const crest = (height: number): NetworkDesignInput => ({
+    name: 'over a crest',
+    network: {
+      fluid: design.system.fluid,
+      nodes: [
+        { id: 'well', elevation: q(0, 'm'), surface: {} },
+        { id: 'crest', elevation: q(height, 'm') },
+        { id: 'in', elevation: q(0, 'm') },
+        { id: 'out', elevation: q(0, 'm') },
+        { id: 'tank', elevation: q(30, 'm'), surface: {} },
+      ],
+      links: [
+        { id: 'up', from: 'well', to: 'crest', run: riser(20, 102.3) },
+        { id: 'down', from: 'crest', to: 'in', run: riser(20, 102.3) },
+        { id: 'pump', from: 'in', to: 'out', pump: fastPump },
+        { id: 'main', from: 'out', to: 'tank', run: riser(200, 102.3) },
+      ],
+    },
+    pumpLink: 'pump',
+    dutyFlow: q(20, 'L/s'),
+    candidates: [{ name: 'fast', pump: fastPump, motorEfficiency: 0.9 }],
+  });
+
+  it('a node below the atmosphere is a warning, below the vapour pressure an error', () => {
+    const five = evaluateDesign(crest(5));
+    const low = five.checks.filter((k) => k.id === 'node-below-atmosphere');
+    // The crest, and the pump's suction below the atmosphere by the suction line's losses.
+    expect(low.map((k) => k.words['node'])).toEqual(['crest', 'in']);
+    expect(low[0]?.severity).toBe('warning');
+    expect(five.checks.some((k) => k.id === 'node-vapour-pressure')).toBe(false);
+    const twelve = evaluateDesign(crest(12));
+    const boil = twelve.checks.filter((k) => k.id === 'node-vapour-pressure');
+    expect(boil.map((k) => k.words['node'])).toEqual(['crest']);
+    expect(boil[0]?.severity).toBe('error');
+    expect(twelve.passed).toBe(false);
+    expect(twelve.candidates[0]?.checks.some((k) => k.id === 'node-vapour-pressure')).toBe(true);
+  });
+
+  it('shut-off pressure above the design pressure is an error at each discharge-side node', () => {
+    const input: NetworkDesignInput = {
+      ...crest(0),
+      limits: { designPressure: bar(5) },
+    };
+    const report = evaluateDesign(input);
+    const c = report.candidates[0];
+    const shut = c?.checks.filter((k) => k.id === 'shutoff-pressure') ?? [];
+    // fastPump shuts off at 75 m: 7.35 bar above the well at the pump (elevation 0), so the
+    // pump outlet ('out') exceeds 5 bar gauge; the tank is a surface and holds its own.
+    expect(shut.map((k) => k.words['node'])).toEqual(['out']);
+    const rhoG = design.system.fluid.density * STANDARD_GRAVITY;
+    const shutoff = fastPump.shutoffHead ?? 0;
+    expectRelative(shut[0]?.values['maxPressure'] ?? 0, STANDARD_ATMOSPHERE + rhoG * shutoff, 1e-9);
+  });
+});
