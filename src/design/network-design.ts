@@ -328,7 +328,11 @@ function checkParts(input: NetworkDesignInput, candidates: readonly Candidate[])
 }
 
 /** Solves a case with a head-rise curve in the pump link. */
-function solveWith(parts: Parts, ctx: CaseContext, curve: HeadRiseCurve): NetworkSolution {
+function solveWith(
+  parts: Parts,
+  ctx: Pick<CaseContext, 'operatingCase'>,
+  curve: HeadRiseCurve,
+): NetworkSolution {
   const k = ctx.operatingCase;
   return parts.prepared.solve({ ...k, pumps: { ...k.pumps, [parts.pumpLink]: curve } });
 }
@@ -352,7 +356,7 @@ function caseContext(parts: Parts, k: NetworkCase, name: string): CaseContext {
     const start = 1e-14 * parts.cap;
     staticHead = leastMeeting(
       (h) => {
-        const sol = solveWith(parts, { operatingCase: k } as CaseContext, source(h, parts.cap));
+        const sol = solveWith(parts, { operatingCase: k }, source(h, parts.cap));
         return { value: (sol.links[parts.pumpLink]?.flow ?? 0) - start, at: sol };
       },
       1e-6,

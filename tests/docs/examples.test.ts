@@ -198,4 +198,3 @@ describe('every example file', () => {
     }
   });
 });
-
