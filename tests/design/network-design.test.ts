@@ -1,6 +1,12 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { design, fastPump, slowPump } from '../../docs/examples/irrigation-lift';
-import { type DesignReport, evaluateDesign, type NetworkDesignInput } from '../../src/design/index';
+import {
+  type DesignReport,
+  evaluateDesign,
+  type NetworkDesignInput,
+  readDesignFile,
+} from '../../src/design/index';
 import {
   type NetworkCase,
   type NetworkDefinition,
@@ -318,5 +324,95 @@ describe('node pressure checks of a network', () => {
     const rhoG = design.system.fluid.density * STANDARD_GRAVITY;
     const shutoff = fastPump.shutoffHead ?? 0;
     expectRelative(shut[0]?.values['maxPressure'] ?? 0, STANDARD_ATMOSPHERE + rhoG * shutoff, 1e-9);
+  });
+});
+
+describe('sets, failures and refusals on a network', () => {
+  const base: NetworkDesignInput = {
+    name: 'booster',
+    network: building,
+    pumpLink: 'booster',
+    service: [{ node: 'tap 3', minPressure: bar(1.5) }],
+  };
+  const twoInParallel = evaluateDesign({
+    ...base,
+    candidates: [
+      { name: 'pair', pump: fastPump, count: 2, arrangement: 'parallel', motorEfficiency: 0.9 },
+      { name: 'series', pump: slowPump, count: 2, arrangement: 'series', motorEfficiency: 0.9 },
+    ],
+  });
+
+  it('a set of identical pumps: each pump at the set flow / n (parallel), head / n (series)', () => {
+    const pair = twoInParallel.candidates.find((c) => c.name === 'pair');
+    const r = pair?.cases[0];
+    expectRelative(r?.head ?? 0, fastPump.head(((r?.flow ?? 0) / 2) as Flow), 1e-9);
+    const series = twoInParallel.candidates.find((c) => c.name === 'series');
+    const s = series?.cases[0];
+    expectRelative(s?.head ?? 0, 2 * slowPump.head((s?.flow ?? 0) as Flow), 1e-9);
+  });
+
+  it('a pump that cannot reach the duty: no operating point, an error check', () => {
+    const weak = evaluateDesign({
+      ...base,
+      candidates: [
+        { name: 'tiny', pump: slowPump.atSpeed(q(300, 'rpm')), motorEfficiency: 0.9 },
+        {
+          name: 'tiny drive',
+          pump: slowPump.atSpeed(q(300, 'rpm')),
+          control: 'speed',
+          motorEfficiency: 0.9,
+        },
+      ],
+    });
+    for (const c of weak.candidates) {
+      expect(c.passed, c.name).toBe(false);
+      expect(c.cases[0]?.failure, c.name).toBeDefined();
+      expect(c.checks.some((k) => k.id === 'no-operating-point')).toBe(true);
+    }
+  });
+
+  it('refuses a duty the network meets without the pump, cases named twice, a bad case', () => {
+    // The booster example with its break tank lifted 60 m: the fixtures get their pressure,
+    // and a small flow, by gravity alone.
+    const file = readDesignFile(
+      readFileSync(new URL('../../docs/examples/booster-floors.json', import.meta.url), 'utf8'),
+    ) as NetworkDesignInput;
+    const lifted: NetworkDesignInput = {
+      ...file,
+      candidates: [],
+      cases: [{ name: 'high', levels: { 'break tank': q(60, 'm') } }],
+    };
+    expect(expectHeadflowError(() => evaluateDesign(lifted), 'INVALID_ARGUMENT').parameter).toBe(
+      'service',
+    );
+    const { service: _s, ...flowDuty } = lifted;
+    expect(
+      expectHeadflowError(
+        () => evaluateDesign({ ...flowDuty, dutyFlow: q(0.1, 'L/s') }),
+        'INVALID_ARGUMENT',
+      ).parameter,
+    ).toBe('dutyFlow');
+    expect(
+      expectHeadflowError(
+        () => evaluateDesign({ ...base, cases: [{ name: 'a' }, { name: 'a' }] }),
+        'INVALID_ARGUMENT',
+      ).parameter,
+    ).toBe('cases[1].name');
+    expectHeadflowError(
+      () => evaluateDesign({ ...base, units: 'metric' as never }),
+      'INVALID_ARGUMENT',
+    );
+    expectHeadflowError(() => evaluateDesign(base, { curves: 'yes' as never }), 'INVALID_ARGUMENT');
+  });
+
+  it('a liquid without a vapour pressure: no NPSH, a note that it is not checked', () => {
+    const { vaporPressure: _v, ...noVapour } = building.fluid;
+    const r = evaluateDesign({
+      ...base,
+      network: { ...building, fluid: noVapour },
+      candidates: [{ name: 'pair', pump: fastPump, count: 2, motorEfficiency: 0.9 }],
+    });
+    expect(r.duty[0]?.npshAvailable).toBeUndefined();
+    expect(r.checks.some((k) => k.id === 'npsh-data')).toBe(true);
   });
 });
