@@ -103,3 +103,76 @@ describe('network cases in a file', () => {
     expect(paths(ring)).toEqual(['cases[2].demands.attic']);
   });
 });
+
+describe('the network form: more fields and refusals', () => {
+  const ring = () => JSON.parse(readFileSync(join(EXAMPLES_DIR, 'ring-main.json'), 'utf8'));
+
+  it('reads a pressurized surface, an absolute outlet rating and a flow-limiting valve', () => {
+    const f = ring();
+    f.nodes[0].surface = { gaugePressure: '0.5 bar' };
+    f.links[8].valve = { kind: 'flow-limiting', setting: '3 L/s', diameter: '100 mm', openK: 4 };
+    f.nodes.push({
+      id: 'hydrant',
+      elevation: '100 m',
+      outlet: { ratedFlow: '5 L/s', ratedPressure: '301.325 kPa(a)', exponent: 0.5 },
+    });
+    f.links.push({
+      id: 'to hydrant',
+      from: 'west',
+      to: 'hydrant',
+      status: 'closed',
+      run: f.links[3].run,
+    });
+    const d = readDesignFile(f) as NetworkDesignInput;
+    const well = d.network.nodes[0];
+    expect(well && 'surface' in well ? well.surface.pressure : 0).toBeCloseTo(
+      STANDARD_ATMOSPHERE + 5e4,
+      6,
+    );
+    const hydrant = d.network.nodes.find((n) => n.id === 'hydrant');
+    // 5 L/s at 200 kPa gauge: k = 0.005 / 200000^0.5.
+    expect(hydrant && 'outlet' in hydrant ? hydrant.outlet.coefficient : 0).toBeCloseTo(
+      0.005 / Math.sqrt(2e5),
+      12,
+    );
+    const valve = d.network.links.find((l) => l.id === 'zone valve');
+    expect(valve && 'valve' in valve ? valve.valve.setting : 0).toBeCloseTo(0.003, 12);
+  });
+
+  it('refuses line-form fields, two pump links, a case temperature for a constant fluid', () => {
+    const f = ring();
+    expect(paths({ ...f, suction: { elevation: '0 m' } })).toEqual(['suction']);
+    expect(paths({ ...f, pumpLocation: { elevation: '0 m' } })).toEqual(['pumpLocation']);
+    const twice = ring();
+    twice.links[3] = { id: 'second', from: 'west', to: 'north', pump: 'candidates' };
+    expect(paths(twice)).toEqual(['links[3].pump']);
+    const suction = ring();
+    suction.cases[0].suction = { elevation: '1 m' };
+    expect(paths(suction)).toEqual(['cases[0].suction']);
+    const constant = ring();
+    constant.fluid = {
+      constant: { name: 'water', density: '1000 kg/m3', viscosity: '1 cSt', vaporPressure: '2 kPa' },
+    };
+    constant.cases[0].temperature = '20 degC';
+    expect(paths(constant)).toEqual(['cases[0].temperature']);
+    const valve = ring();
+    valve.links[8].valve.kind = 'flow-limiting';
+    expect(paths(valve)).toEqual(['links[8].valve.setting']);
+  });
+
+  it('reads case temperatures, aged pipe and statuses', () => {
+    const f = ring();
+    f.cases.push({
+      name: 'winter, aged',
+      temperature: '4 degC',
+      aged: true,
+      status: { 'tank main': 'closed' },
+    });
+    for (const l of f.links) if (l.run) l.run.agedRoughness = '0.5 mm';
+    const d = readDesignFile(f) as NetworkDesignInput;
+    const winter = d.cases?.[3];
+    expect(winter?.aged).toBe(true);
+    expect(winter?.status?.['tank main']).toBe('closed');
+    expect(winter?.fluid?.density).toBeGreaterThan(d.network.fluid.density);
+  });
+});
