@@ -779,6 +779,7 @@ function runCase(
     npshRatio: at.npshRatio,
     velocities,
     iterations,
+    network: tables(parts, sol, parts.dutyFlow === undefined ? 'service' : 'flow', 0),
   };
 }
 

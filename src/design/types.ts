@@ -352,6 +352,8 @@ export interface CaseResult {
   readonly specificEnergy: number | undefined;
   /** Root-finder iterations for the operating point (and the speed, under speed control). */
   readonly iterations: number;
+  /** On a network: the whole network at this operating point (node and link tables). */
+  readonly network?: NetworkTables;
 }
 
 /** A candidate's evaluation. */

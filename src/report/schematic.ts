@@ -24,6 +24,11 @@ export interface SchematicOptions {
   readonly units?: UnitSystem;
   /** The operating case to show (its name); default the first. */
   readonly case?: string;
+  /**
+   * Draw the network at this candidate's operating point (its name) instead of at the duty;
+   * nodes below their service minimum there are marked.
+   */
+  readonly candidate?: string;
   /** Width of the drawing (px), 600 to 3000; default 900. */
   readonly width?: number;
 }
@@ -116,10 +121,10 @@ function linkLabel(
  * document, in the report's unit system.
  *
  * @param report - a report from `evaluateDesign` on a network (`report.network` present)
- * @param options - `units`, `case` (name), `width` (px)
+ * @param options - `units`, `case` (name), `candidate` (name), `width` (px)
  * @returns the SVG text
  * @throws HeadflowError `INVALID_ARGUMENT` for a report of a line (no network), an unknown
- *   case, units other than `'si'` and `'us'`, or a width outside 600 to 3000.
+ *   case or candidate, units other than `'si'` and `'us'`, or a width outside 600 to 3000.
  * @example
  * ```ts
  * const report = evaluateDesign(readDesignFile(text));
@@ -162,7 +167,23 @@ export function renderSchematic(
     }
   }
   const s = sayIn(units, 'unicode');
-  const tables = duty?.network?.tables;
+  let tables = duty?.network?.tables;
+  let subject = 'duty';
+  if (o.candidate !== undefined) {
+    const name = guardString('options.candidate', o.candidate);
+    const c = r.candidates.find((k) => k.name === name);
+    if (c === undefined) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        'options.candidate',
+        name,
+        undefined,
+        `one of the report's candidates: ${r.candidates.map((k) => k.name).join(', ')}`,
+      );
+    }
+    tables = c.cases.find((k) => k.case === duty?.case)?.network;
+    subject = `operating point of ${name}`;
+  }
   const raw = positions(layout);
   const xs = [...raw.values()].map((p) => p.x);
   const ys = [...raw.values()].map((p) => p.y);
@@ -195,7 +216,7 @@ export function renderSchematic(
   const short = new Set(
     (tables?.nodes ?? []).filter((n) => n.shortfall !== undefined).map((n) => n.id),
   );
-  const title = `Network at the duty: ${duty?.case ?? ''}`;
+  const title = `Network at the ${subject}: ${duty?.case ?? ''}${tables === undefined ? ' (no operating point)' : ''}`;
   const note = 'Pressures gauge. Heavy line: the pump. Red: below service minimum.';
   const noteWidth = textWidth(note, FONT);
   taken.push(textBox(note, width - MARGIN - noteWidth, height0 - 8, FONT));

@@ -151,7 +151,12 @@ describe('the network form: more fields and refusals', () => {
     expect(paths(suction)).toEqual(['cases[0].suction']);
     const constant = ring();
     constant.fluid = {
-      constant: { name: 'water', density: '1000 kg/m3', viscosity: '1 cSt', vaporPressure: '2 kPa' },
+      constant: {
+        name: 'water',
+        density: '1000 kg/m3',
+        viscosity: '1 cSt',
+        vaporPressure: '2 kPa',
+      },
     };
     constant.cases[0].temperature = '20 degC';
     expect(paths(constant)).toEqual(['cases[0].temperature']);

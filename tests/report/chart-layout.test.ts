@@ -271,3 +271,29 @@ describe("the network schematic's labels do not overlap, leave the drawing or ge
     }
   }
 });
+
+describe('the schematic at a candidate that leaves nodes short', () => {
+  const design = readDesignFile(readFileSync(join(DIR, 'booster-floors.json'), 'utf8'));
+  const report = evaluateDesign(design);
+  it('marks every node below its service minimum and keeps its labels clear', () => {
+    const svg = renderSchematic(report, { candidate: 'booster C-32, fixed', units: 'us' });
+    expect(problems(svg)).toEqual([]);
+    const short = report.candidates
+      .find((c) => c.name === 'booster C-32, fixed')
+      ?.checks.filter((k) => k.id === 'service-pressure' && k.case === report.duty[0]?.case)
+      .map((k) => k.words['node']);
+    expect(short?.length).toBeGreaterThan(0);
+    for (const id of short ?? []) {
+      expect(svg).toMatch(new RegExp(`class="node outlet below-service"[^>]*><title>${id}<`));
+      expect(svg).toContain(`${id}: `);
+    }
+    expect(svg).toContain('(below service minimum)');
+  });
+  it('refuses a line report, an unknown case or candidate, a bad width', () => {
+    const line = evaluateDesign(readDesignFile(readFileSync(join(DIR, 'canal-lift.json'), 'utf8')));
+    expect(() => renderSchematic(line)).toThrow(/network/);
+    expect(() => renderSchematic(report, { case: 'flood' })).toThrow(/case/);
+    expect(() => renderSchematic(report, { candidate: 'nobody' })).toThrow(/candidate/);
+    expect(() => renderSchematic(report, { width: 100 })).toThrow(/width/);
+  });
+});
