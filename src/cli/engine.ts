@@ -9,16 +9,18 @@ import {
   type DesignInput,
   type DesignReport,
   evaluateDesign,
+  type NetworkDesignInput,
   type UnitSystem,
 } from '../design/index';
-// readScenario joins the design barrel when the lead exports it; until then, its own file.
-import { readScenario } from '../design/scenario-file';
+// The scenario reader from its own file (the CLI bundle keeps the design barrel small).
+import { readDesignFile } from '../design/scenario-file';
 import {
   chartSpecFromReport,
   renderChart,
   renderHtml,
   renderJson,
   renderMarkdown,
+  renderSchematic,
   renderSelection,
   renderText,
 } from '../report/index';
@@ -29,9 +31,10 @@ export type ReportFormat = 'text' | 'markdown' | 'json' | 'html';
 
 /** The library functions the command calls. */
 export interface Engine {
-  readScenario(json: string, source: string): DesignInput;
+  /** Either form of scenario file: a line or a network. */
+  readScenario(json: string, source: string): DesignInput | NetworkDesignInput;
   /** `curves`: sample the chart's curves (for `--chart` and the HTML page); default false. */
-  evaluate(design: DesignInput, curves?: boolean): DesignReport;
+  evaluate(design: DesignInput | NetworkDesignInput, curves?: boolean): DesignReport;
   /** `summary`: the short form instead of the full calculation sheet; default false. */
   render(
     report: DesignReport,
@@ -40,6 +43,8 @@ export interface Engine {
     summary?: boolean,
   ): string;
   chart(report: DesignReport, units: UnitSystem | undefined): string;
+  /** The schematic SVG of a network report. */
+  schematic(report: DesignReport, units: UnitSystem | undefined): string;
   readCatalogue(json: string, source: string): PumpCatalogue;
   select(design: DesignInput, catalogue: PumpCatalogue): Selection;
   renderSelection(
@@ -60,7 +65,7 @@ function unitsOption(units: UnitSystem | undefined): { units?: UnitSystem } {
 
 /** The library itself. */
 export const libraryEngine: Engine = {
-  readScenario: (json, source) => readScenario(json, { source }),
+  readScenario: (json, source) => readDesignFile(json, { source }),
   evaluate: (design, curves = false) => evaluateDesign(design, { curves }),
   render(report, format, units, summary = false) {
     const options = { ...unitsOption(units), summary };
@@ -70,6 +75,7 @@ export const libraryEngine: Engine = {
     return renderText(report, options);
   },
   chart: (report, units) => renderChart(chartSpecFromReport(report, unitsOption(units))),
+  schematic: (report, units) => renderSchematic(report, unitsOption(units)),
   readCatalogue: (json, source) => readCatalogue(json, { source }),
   select: (design, catalogue) => selectPumps(design, catalogue),
   renderSelection: (selection, format, units) =>

@@ -67,6 +67,8 @@ Options:
   -o, --output <file>                write the report to a file instead of standard output
       --chart <file.svg>             also write the SVG chart of the curves (select: the
                                      three leading passing ways)
+      --schematic <file.svg>         also write the schematic SVG of a network (nodes with
+                                     their pressure, links with flow and velocity)
   -c, --catalogue <file.json>        the pump catalogue (select only)
   -h, --help                         print this help
   -v, --version                      print the version
@@ -105,6 +107,7 @@ interface Parsed {
   readonly units: UnitSystem | undefined;
   readonly output: string | undefined;
   readonly chart: string | undefined;
+  readonly schematic: string | undefined;
   readonly summary: boolean;
 }
 
@@ -121,7 +124,16 @@ function pick<T extends string>(
 }
 
 /** The long options of the command, for "did you mean". */
-const LONG_OPTIONS = ['format', 'units', 'summary', 'output', 'chart', 'help', 'version'] as const;
+const LONG_OPTIONS = [
+  'format',
+  'units',
+  'summary',
+  'output',
+  'chart',
+  'schematic',
+  'help',
+  'version',
+] as const;
 
 /** Edit distance between two short words (insertions, deletions, substitutions). */
 function distance(a: string, b: string): number {
@@ -165,6 +177,7 @@ function parse(argv: readonly string[]): Parsed {
         units: { type: 'string', short: 'u' },
         output: { type: 'string', short: 'o' },
         chart: { type: 'string' },
+        schematic: { type: 'string' },
         catalogue: { type: 'string', short: 'c' },
         summary: { type: 'boolean', short: 's' },
         help: { type: 'boolean', short: 'h' },
@@ -212,6 +225,15 @@ function parse(argv: readonly string[]): Parsed {
   if (output !== undefined && output === chart) {
     throw new InputError('--output and --chart name the same file.');
   }
+  const schematic = text('schematic');
+  if (schematic !== undefined && (schematic === output || schematic === chart)) {
+    throw new InputError(
+      `--schematic names the same file as --${schematic === output ? 'output' : 'chart'}.`,
+    );
+  }
+  if (schematic !== undefined && command === 'select') {
+    throw new InputError('--schematic belongs to evaluate (a network scenario).');
+  }
   return {
     command,
     catalogue,
@@ -222,6 +244,7 @@ function parse(argv: readonly string[]): Parsed {
     units: pick(text('units'), UNIT_SYSTEMS, 'units'),
     output,
     chart,
+    schematic,
     summary: values['summary'] === true,
   };
 }
@@ -301,6 +324,11 @@ export async function runCli(
     const file = args.file as string;
     const design = engine.readScenario(await readText(io, file), file);
     if (args.command === 'select') {
+      if ('network' in design) {
+        throw new InputError(
+          `${file} describes a network; select ranks catalogue pumps for the line form. Give the network's candidates in the file and run evaluate.`,
+        );
+      }
       const path = args.catalogue as string;
       const catalogue = engine.readCatalogue(await readText(io, path), path);
       const selection = engine.select(design, catalogue);
@@ -318,11 +346,17 @@ export async function runCli(
       io.stderr('headflow: no pump of the catalogue passes every check (see the report).\n');
       return EXIT.checkFailed;
     }
+    if (args.schematic !== undefined && !('network' in design)) {
+      throw new InputError(`--schematic draws a network; ${file} describes a line.`);
+    }
     const report = engine.evaluate(design, args.chart !== undefined || args.format === 'html');
     const rendered = engine.render(report, args.format, args.units, args.summary);
     if (args.output === undefined) io.stdout(rendered);
     else await writeText(io, args.output, rendered);
     if (args.chart !== undefined) await writeText(io, args.chart, engine.chart(report, args.units));
+    if (args.schematic !== undefined) {
+      await writeText(io, args.schematic, engine.schematic(report, args.units));
+    }
     if (report.passed) return EXIT.passed;
     const n = errorCount(report);
     io.stderr(

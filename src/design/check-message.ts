@@ -6,11 +6,12 @@
  * @module
  */
 import { guardOneOf, guardRecord, guardString } from '../guards';
+import { type Pressure, to } from '../units/index';
 import { intakeSubmergenceMessage } from './checks/intake-submergence';
 import { lowFlowHeatingMessage } from './checks/low-flow-heating';
 import { surgeMessage } from './checks/surge';
 import { viscousCorrectionMessage } from './checks/viscous-correction';
-import { type Say, type SymbolStyle, sayIn, short } from './say';
+import { pressureUnit, type Say, type SymbolStyle, sayIn, short } from './say';
 import type { Check, UnitSystem } from './types';
 
 const n = (check: Check, key: string): number => check.values[key] ?? Number.NaN;
@@ -38,6 +39,21 @@ function noPoint(c: Check, s: Say): string {
     default:
       return w(c, 'detail') || 'the pump curve and the system curve do not meet.';
   }
+}
+
+/** A gauge pressure from an absolute one: `215 kPa gauge`, `31.2 psig`. */
+function gauge(s: Say, absolute: number, atmosphere: number): string {
+  const x = absolute - atmosphere;
+  return Number.isFinite(x)
+    ? `${short(to(x as Pressure, s.units.pressure), 4)} ${pressureUnit(s.system, 'gauge')}`
+    : '-';
+}
+
+/** A pressure difference: `35 kPa`, `5.1 psi`. */
+function difference(s: Say, x: number): string {
+  return Number.isFinite(x)
+    ? `${short(to(x as Pressure, s.units.pressure), 3)} ${s.sym(s.units.pressure)}`
+    : '-';
 }
 
 function dutyFlow(c: Check, s: Say): string {
@@ -99,7 +115,16 @@ function message(c: Check, s: Say): string {
       return `The duty profile cannot be met at ${s.flow(n(c, 'flow'))}: ${w(c, 'detail') || 'the set cannot run there'}.`;
     case 'dead-head':
       return `Against a closed discharge the set runs at shut-off (${s.head(n(c, 'shutoffHead'))}) and heats the liquid it churns: provide a minimum-flow bypass, a low-flow trip or interlocked valves.`;
+    case 'service-pressure':
+      return `Node '${w(c, 'node')}' is at ${gauge(s, n(c, 'pressure'), n(c, 'atmosphere'))}, ${difference(s, n(c, 'shortfall'))} below its service minimum of ${gauge(s, n(c, 'minPressure'), n(c, 'atmosphere'))}: more head, a larger pipe or a booster nearer the node.`;
+    case 'node-vapour-pressure':
+      return `Node '${w(c, 'node')}' is at ${s.absolute(n(c, 'pressure'))}, below the liquid's vapour pressure ${s.absolute(n(c, 'vaporPressure'))}: the liquid would boil there and the steady result is not physical. Lower that part of the network or raise the pressure there.`;
+    case 'node-below-atmosphere':
+      return `Node '${w(c, 'node')}' is below the atmosphere (${gauge(s, n(c, 'pressure'), n(c, 'atmosphere'))}): air is drawn in at leaks and air valves there.`;
     case 'shutoff-pressure':
+      if (w(c, 'node') !== '') {
+        return `At shut-off, with everything downstream closed, node '${w(c, 'node')}' reaches ${s.absolute(n(c, 'maxPressure'))}, above the piping's design pressure ${s.absolute(n(c, 'designPressure'))}: use a lower-head pump, a relief valve or a higher pressure rating.`;
+      }
       return `At shut-off the discharge pressure reaches ${s.absolute(n(c, 'maxPressure'))}, above the piping's design pressure ${s.absolute(n(c, 'designPressure'))}: use a lower-head pump, a relief valve or a higher pressure rating.`;
     case 'curve-fit':
       return w(c, 'curve') === 'efficiency'

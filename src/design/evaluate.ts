@@ -27,6 +27,8 @@ import {
   systemScenarios,
 } from '../system/index';
 import {
+  type Acceleration,
+  type Density,
   type Flow,
   type Length,
   type Power,
@@ -64,6 +66,7 @@ import {
   viscousCorrection,
 } from './checks/index';
 import { checkDesignShape } from './input-shape';
+import { evaluateNetworkDesign, isNetworkDesign } from './network-design';
 import type {
   Arrangement,
   CandidateInput,
@@ -74,6 +77,7 @@ import type {
   DesignInput,
   DesignReport,
   EvaluateOptions,
+  NetworkDesignInput,
   NpshTerms,
   ReportCurves,
   ReportFluid,
@@ -97,11 +101,11 @@ export const DESIGN_DEFAULTS = {
 const SAMPLES = 61;
 
 /** The checks with their messages written in a unit system. */
-function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
+export function withMessages(checks: readonly Check[], units: UnitSystem): Check[] {
   return checks.map((k) => ({ ...k, message: checkMessage(k, units) }));
 }
 
-function resolveLimits(input: DesignInput): Limits {
+export function resolveLimits(input: Pick<DesignInput, 'limits' | 'units'>): Limits {
   const l = input.limits ?? {};
   const ratio = l.npshMarginRatio ?? DESIGN_DEFAULTS.npshMarginRatio;
   if (!Number.isFinite(ratio) || ratio < 1) {
@@ -233,7 +237,7 @@ function resolveCandidate(c: CandidateInput, i: number): Candidate {
  * (each carries Q/N at the full head), N in series share the head (each adds H/N at the full
  * flow). Exact for identical pumps.
  */
-function perPump(c: Candidate, system: SystemCurve): SystemCurveLike {
+export function perPump(c: Candidate, system: SystemCurveLike): SystemCurveLike {
   const m = c.arrangement === 'series' ? c.count : 1;
   return {
     staticHead: (system.staticHead / m) as Length,
@@ -483,7 +487,7 @@ function dutyInCase(
 }
 
 /** The operating region of a pump's share, from the pumps module's own region test. */
-function regionOf(share: PumpShare | undefined): CaseResult['region'] {
+export function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   if (share?.inPreferredRegion === undefined || share.inAllowableRegion === undefined) {
     return undefined;
   }
@@ -491,7 +495,7 @@ function regionOf(share: PumpShare | undefined): CaseResult['region'] {
   return share.inAllowableRegion ? 'allowable' : 'outside';
 }
 
-function message(e: unknown): string {
+export function message(e: unknown): string {
   if (e instanceof HeadflowError) return e.message;
   throw e;
 }
@@ -499,6 +503,63 @@ function message(e: unknown): string {
 /** A run's name with its branch path (`loop / branch 2 / hose`). */
 function runLabel(r: { readonly name: string; readonly group: string | undefined }): string {
   return r.group ? `${r.group} / ${r.name}` : r.name;
+}
+
+/** Where the point checks of one candidate in one case are written, and what they need. */
+export interface PointContext {
+  readonly caseName: string;
+  readonly density: Density;
+  readonly g: Acceleration | undefined;
+  readonly limits: Limits;
+  readonly checks: Check[];
+  /** Whether NPSH is to be checked (a pump location is known): missing NPSHr data warns. */
+  readonly npshExpected: boolean;
+}
+
+/**
+ * A candidate at one pump's flow `q` on curve `pump` (at the speed it runs): head of the set,
+ * efficiency, shaft power of the set, % of BEP and region, NPSH required and the margin, with
+ * the region, NPSH and motor-overload checks. Shared by lines and networks.
+ */
+export function pointAt(
+  c: Candidate,
+  pump: PumpCurve,
+  q: number,
+  npsha: Length | undefined,
+  at: PointContext,
+) {
+  const flow = c.setFlow(q);
+  const { caseName: name, density, limits, checks } = at;
+  const head = c.setHead(pump.head(q as Flow));
+  const efficiency = pump.efficiency(q as Flow);
+  const shaftPower = c.count * pump.shaftPower(q as Flow, density, at.g);
+  const share = pump.shares(q as Flow)[0];
+  const percentOfBep = share?.percentOfBep;
+  const region = regionOf(share);
+  if (region === 'allowable') {
+    checks.push(preferredRegionCheck(c.name, name, percentOfBep));
+  } else if (region === 'outside') {
+    checks.push(allowableRegionCheck(c.name, name, percentOfBep));
+  }
+  const npshr =
+    pump.npshRange !== undefined && q >= pump.npshRange.min && q <= pump.npshRange.max
+      ? pump.npshRequired(q as Flow)
+      : undefined;
+  let npshRatio: number | undefined;
+  if (npsha !== undefined && npshr !== undefined) {
+    const m = npshMarginCheck(c.name, name, npsha, npshr, limits);
+    npshRatio = m.ratio;
+    if (m.check !== undefined) checks.push(m.check);
+  } else if (at.npshExpected && npshr === undefined) {
+    checks.push(npshNoDataCheck(c.name, name, flow));
+  }
+  if (c.input.motorRating !== undefined) {
+    const perPumpPower = shaftPower / c.count;
+    const sf = c.input.serviceFactor ?? 1;
+    const overload = motorOverloadInCase(c.name, name, perPumpPower, c.input.motorRating, sf);
+    if (overload !== undefined) checks.push(overload);
+  }
+  return { head, efficiency, shaftPower, percentOfBep, region, npshr, npshRatio };
 }
 
 /** One candidate in one case: where it runs and the checks there. */
@@ -551,37 +612,22 @@ function runCase(
     return { ...empty, failure: checkMessage(k, limits.units) };
   }
   const flow = c.setFlow(q);
-  const head = c.setHead(pump.head(q as Flow));
-  const efficiency = pump.efficiency(q as Flow);
-  const shaftPower = c.count * pump.shaftPower(q as Flow, fluid.density, s.curve.definition.g);
-  const share = pump.shares(q as Flow)[0];
-  const percentOfBep = share?.percentOfBep;
-  const region = regionOf(share);
   if (c.control === 'fixed') dutyFlowCheck(input.dutyFlow, flow, c.name, s.name, limits, checks);
-  if (region === 'allowable') {
-    checks.push(preferredRegionCheck(c.name, s.name, percentOfBep));
-  } else if (region === 'outside') {
-    checks.push(allowableRegionCheck(c.name, s.name, percentOfBep));
-  }
   const npsha = npshAvailableAt(input, s.curve, flow);
-  const npshr =
-    pump.npshRange !== undefined && q >= pump.npshRange.min && q <= pump.npshRange.max
-      ? pump.npshRequired(q as Flow)
-      : undefined;
-  let npshRatio: number | undefined;
-  if (npsha !== undefined && npshr !== undefined) {
-    const m = npshMarginCheck(c.name, s.name, npsha, npshr, limits);
-    npshRatio = m.ratio;
-    if (m.check !== undefined) checks.push(m.check);
-  } else if (input.pumpLocation !== undefined && npshr === undefined) {
-    checks.push(npshNoDataCheck(c.name, s.name, flow));
-  }
-  if (c.input.motorRating !== undefined) {
-    const perPumpPower = shaftPower / c.count;
-    const sf = c.input.serviceFactor ?? 1;
-    const overload = motorOverloadInCase(c.name, s.name, perPumpPower, c.input.motorRating, sf);
-    if (overload !== undefined) checks.push(overload);
-  }
+  const { head, efficiency, shaftPower, percentOfBep, region, npshr, npshRatio } = pointAt(
+    c,
+    pump,
+    q,
+    npsha,
+    {
+      caseName: s.name,
+      density: fluid.density,
+      g: s.curve.definition.g,
+      limits,
+      checks,
+      npshExpected: input.pumpLocation !== undefined,
+    },
+  );
   const details = s.curve.details(flow as Flow);
   const drive = c.input.driveEfficiency ?? 1;
   const inputPower = shaftPower / (c.input.motorEfficiency * drive);
@@ -623,8 +669,6 @@ function evaluateCandidate(
   const inCase = onLiquid.map((v) => v.candidate);
   const cases = family.map((s, i) => runCase(input, inCase[i] ?? c, s, limits, checks));
   const design = family[0] as ScenarioCurve;
-  const density = design.curve.definition.fluid.density;
-  const series = c.input.motorSeries ?? 'iec';
   // The motor is sized on the most viscous case's (corrected) curve, the energy on the design
   // case's: both are the water curve itself for a water-like liquid.
   const mostViscous = family.reduce(
@@ -635,8 +679,79 @@ function evaluateCandidate(
         : best,
     0,
   );
-  const fullSpeed = (inCase[mostViscous] ?? c).fullSpeed;
-  const onDesign = inCase[0] ?? c;
+  return finishCandidate(c, cases, checks, {
+    system: design.curve,
+    caseName: design.name,
+    density: design.curve.definition.fluid.density,
+    g: design.curve.definition.g,
+    profile,
+    energyPrice: input.energyPrice,
+    limits,
+    motorSet: inCase[mostViscous] ?? c,
+    energySet: inCase[0] ?? c,
+    shutoffChecks: (setShutoff) => {
+      if (limits.designPressure !== undefined) {
+        for (const s of family) {
+          const def = s.curve.definition;
+          const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
+          const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
+          const maxPressure =
+            def.suction.pressure +
+            rhoG * (def.suction.elevation - pumpElevation) +
+            rhoG * setShutoff;
+          const k = shutoffPressureCheck(c.name, s.name, maxPressure, limits.designPressure);
+          if (k !== undefined) checks.push(k);
+        }
+      }
+      const context = {
+        input,
+        candidate: c,
+        inCase,
+        family,
+        cases,
+        limits,
+        npshAvailableAt: (curve: SystemCurve, flow: number) => npshAvailableAt(input, curve, flow),
+      };
+      for (const k of CANDIDATE_CHECKS) checks.push(...k.run(context));
+    },
+  });
+}
+
+/** What {@link finishCandidate} needs of the design case. */
+export interface CandidateContext {
+  /** The system as the whole set sees it in the design case (head the set must add at a set flow). */
+  readonly system: SystemCurveLike;
+  /** Name of the design case. */
+  readonly caseName: string;
+  readonly density: Density;
+  readonly g: number | undefined;
+  readonly profile: readonly ProfileRow[];
+  readonly energyPrice: DesignInput['energyPrice'];
+  readonly limits: Limits;
+  /** The set whose full-speed curve sizes the motor (default the candidate itself). */
+  readonly motorSet?: Candidate;
+  /** The set whose curve the year's energy uses (default the candidate itself). */
+  readonly energySet?: Candidate;
+  /** Adds the shut-off pressure checks (and any others of the whole set) for its shut-off head (m). */
+  readonly shutoffChecks: (setShutoffHead: number) => void;
+}
+
+/**
+ * The rest of a candidate's evaluation once its cases are known: the motor that never
+ * overloads and the duty-only motor, the year's energy over the profile, the dead-head and
+ * shut-off checks, the pump restated. Shared by lines and networks.
+ */
+export function finishCandidate(
+  c: Candidate,
+  cases: readonly CaseResult[],
+  checks: Check[],
+  context: CandidateContext,
+): Omit<CandidateReport, 'rank'> {
+  const { density, profile, limits } = context;
+  const design = { name: context.caseName };
+  const fullSpeed = (context.motorSet ?? c).fullSpeed;
+  const onDesign = context.energySet ?? c;
+  const series = c.input.motorSeries ?? 'iec';
   let maxShaftPower: Power | undefined;
   let motor: CandidateReport['motor'];
   let dutyOnlyMotor: CandidateReport['dutyOnlyMotor'];
@@ -681,7 +796,7 @@ function evaluateCandidate(
     }));
     const e = annualEnergy({
       pump: c.control === 'speed' ? onDesign.pump : onDesign.fullSpeed,
-      system: perPump(c, design.curve),
+      system: perPump(c, context.system),
       profile: perPumpProfile,
       density,
       motorEfficiency: c.input.motorEfficiency,
@@ -689,9 +804,9 @@ function evaluateCandidate(
         ? {}
         : { driveEfficiency: c.input.driveEfficiency }),
       control: c.control === 'speed' ? 'speed' : 'throttle',
-      ...(input.energyPrice === undefined ? {} : { price: input.energyPrice }),
+      ...(context.energyPrice === undefined ? {} : { price: context.energyPrice }),
       ...(c.control === 'speed' ? { maxSpeed: c.maxSpeed } : {}),
-      ...(design.curve.definition.g === undefined ? {} : { g: design.curve.definition.g }),
+      ...(context.g === undefined ? {} : { g: context.g as Acceleration }),
     });
     energy = {
       kWh: e.totalKWh * c.count,
@@ -711,27 +826,7 @@ function evaluateCandidate(
   const shutoff = fullSpeed.shutoffHead ?? fullSpeed.head(fullSpeed.flowRange.min);
   const setShutoff = c.setHead(shutoff);
   checks.push(deadHeadCheck(c.name, setShutoff));
-  if (limits.designPressure !== undefined) {
-    for (const s of family) {
-      const def = s.curve.definition;
-      const rhoG = def.fluid.density * (def.g ?? STANDARD_GRAVITY);
-      const pumpElevation = input.pumpLocation?.elevation ?? def.suction.elevation;
-      const maxPressure =
-        def.suction.pressure + rhoG * (def.suction.elevation - pumpElevation) + rhoG * setShutoff;
-      const k = shutoffPressureCheck(c.name, s.name, maxPressure, limits.designPressure);
-      if (k !== undefined) checks.push(k);
-    }
-  }
-  const context = {
-    input,
-    candidate: c,
-    inCase,
-    family,
-    cases,
-    limits,
-    npshAvailableAt: (curve: SystemCurve, flow: number) => npshAvailableAt(input, curve, flow),
-  };
-  for (const k of CANDIDATE_CHECKS) checks.push(...k.run(context));
+  context.shutoffChecks(setShutoff);
   return {
     name: c.name,
     count: c.count,
@@ -758,7 +853,7 @@ function evaluateCandidate(
   };
 }
 
-function sample(
+export function sample(
   name: string,
   from: number,
   to: number,
@@ -905,6 +1000,60 @@ function curvesOf(
 }
 
 /**
+ * The candidates with their defaults filled in, checked, names unique.
+ * @throws HeadflowError `INVALID_ARGUMENT` as {@link evaluateDesign}.
+ */
+export function resolveCandidates(inputs: readonly CandidateInput[]): Candidate[] {
+  const names = new Set<string>();
+  return inputs.map((c, i) => {
+    const r = resolveCandidate(c, i);
+    if (names.has(r.name)) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `candidates[${i}].name`,
+        r.name,
+        undefined,
+        'a name no other candidate has',
+      );
+    }
+    names.add(r.name);
+    return r;
+  });
+}
+
+/**
+ * The duty profile with its default (the duty flow all year), checked.
+ * @throws HeadflowError `INVALID_ARGUMENT` for a negative flow or hours outside 0 to 8784.
+ */
+export function resolveProfile(
+  given: readonly ProfileRow[] | undefined,
+  dutyFlow: number,
+): readonly ProfileRow[] {
+  const profile = given ?? [{ flow: dutyFlow as Flow, hours: DESIGN_DEFAULTS.hoursPerYear }];
+  profile.forEach((row, i) => {
+    if (!Number.isFinite(row.flow) || row.flow < 0) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `profile[${i}].flow`,
+        row.flow,
+        'm3/s',
+        'a finite flow >= 0',
+      );
+    }
+    if (!Number.isFinite(row.hours) || row.hours < 0 || row.hours > 8784) {
+      throw argumentError(
+        'INVALID_ARGUMENT',
+        `profile[${i}].hours`,
+        row.hours,
+        'h',
+        '0 to 8784 hours',
+      );
+    }
+  });
+  return profile;
+}
+
+/**
  * Evaluates a design: for every operating case, the head the duty needs; for every candidate
  * pump set and case, where it runs (full speed, or the speed a drive needs for the duty flow),
  * its efficiency, shaft power, % of BEP flow and region, NPSH available and required; the
@@ -931,9 +1080,12 @@ function curvesOf(
  * ```
  */
 export function evaluateDesign(
-  input: DesignInput,
+  input: DesignInput | NetworkDesignInput,
   options: EvaluateOptions | null = {},
 ): DesignReport {
+  // --- network hook: a design whose system is a network goes to network-design.ts ---
+  if (isNetworkDesign(input)) return evaluateNetworkDesign(input, options);
+  // --- end of network hook ---
   const o = guardOptions<EvaluateOptions>('options', options);
   const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
   checkDesignShape(input);
@@ -957,43 +1109,8 @@ export function evaluateDesign(
     { ...input.system, name: input.system.name ?? 'design case' },
     input.cases ?? [],
   );
-  const candidateInputs = input.candidates ?? [];
-  const names = new Set<string>();
-  const candidates = candidateInputs.map((c, i) => {
-    const r = resolveCandidate(c, i);
-    if (names.has(r.name)) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `candidates[${i}].name`,
-        r.name,
-        undefined,
-        'a name no other candidate has',
-      );
-    }
-    names.add(r.name);
-    return r;
-  });
-  const profile = input.profile ?? [{ flow: input.dutyFlow, hours: DESIGN_DEFAULTS.hoursPerYear }];
-  profile.forEach((row, i) => {
-    if (!Number.isFinite(row.flow) || row.flow < 0) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `profile[${i}].flow`,
-        row.flow,
-        'm3/s',
-        'a finite flow >= 0',
-      );
-    }
-    if (!Number.isFinite(row.hours) || row.hours < 0 || row.hours > 8784) {
-      throw argumentError(
-        'INVALID_ARGUMENT',
-        `profile[${i}].hours`,
-        row.hours,
-        'h',
-        '0 to 8784 hours',
-      );
-    }
-  });
+  const candidates = resolveCandidates(input.candidates ?? []);
+  const profile = resolveProfile(input.profile, input.dutyFlow);
   const systemChecks: Check[] = [];
   const duty = family.map((s) => dutyInCase(input, s, limits, systemChecks));
   family.forEach((scenario, i) => {

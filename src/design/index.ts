@@ -7,10 +7,13 @@
  */
 export { CAUTIONS } from './cautions';
 export { checkMessage } from './check-message';
+export { SERVICE_SOURCE } from './checks/service-pressure';
 export { displayUnits } from './display-units';
 export { DESIGN_DEFAULTS, evaluateDesign } from './evaluate';
+export { isNetworkDesign, MAX_SEARCH_SOLVES } from './network-design';
 export {
   type ReadScenarioOptions,
+  readDesignFile,
   readScenario,
   SCENARIO_FORMAT,
   ScenarioFileError,
@@ -30,7 +33,12 @@ export type {
   DisplayUnits,
   EvaluateOptions,
   IntakeInput,
+  LinkRow,
   LowFlowInput,
+  NetworkDesignInput,
+  NetworkLayout,
+  NetworkTables,
+  NodeRow,
   NpshTerms,
   PumpLocation,
   ReportCurves,
@@ -39,6 +47,7 @@ export type {
   RunFitting,
   RunInputSummary,
   SampledCurve,
+  ServicePressure,
   Severity,
   SpeedControl,
   SurgeInput,

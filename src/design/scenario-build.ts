@@ -27,21 +27,22 @@ import {
   type Temperature,
 } from '../units/index';
 import { fileMessage, found, type IssueSink, report, reportError } from './scenario-issues';
+import { assembleNetwork } from './scenario-network';
 import type { FileFluid, ScenarioParts } from './scenario-schema';
 import type { FilePressure } from './scenario-values';
-import type { DesignInput, DesignLimits } from './types';
+import type { DesignInput, DesignLimits, NetworkDesignInput } from './types';
 
 type Path = readonly (string | number)[];
 
 /** An end of the system as the file gives it. */
-type FileEndpoint = ScenarioParts['suction'];
+type FileEndpoint = NonNullable<ScenarioParts['suction']>;
 type PartialEndpoint = NonNullable<NonNullable<ScenarioParts['cases']>[number]['suction']>;
 
 /** Largest number of hours in a year (a leap year). */
 const HOURS_IN_A_LEAP_YEAR = 8784;
 
 /** Runs `make`, reporting a HeadflowError at `at` (following its parameter when asked). */
-function attempt<T>(
+export function attempt<T>(
   sink: IssueSink,
   at: Path,
   make: () => T,
@@ -91,7 +92,7 @@ interface GivenPressure {
  * The absolute pressure of an end, or undefined when it gives none (or gives one that cannot
  * be: below a perfect vacuum, or zero, reported at its field).
  */
-function absolute(
+export function absolute(
   sink: IssueSink,
   e: { readonly pressure?: FilePressure; readonly gaugePressure?: FilePressure },
   atmosphere: Pressure,
@@ -160,7 +161,7 @@ const CODE_ADVICE =
  * suction pressure's field when the file gave one there (the likeliest mistake is a gauge
  * reading written as absolute), else at the temperature `at`.
  */
-function state(
+export function state(
   sink: IssueSink,
   fluid: FileFluid,
   temperature: Temperature,
@@ -188,7 +189,7 @@ function state(
   }
 }
 
-function friction(f: NonNullable<ScenarioParts['friction']>): FrictionFactorOptions {
+export function friction(f: NonNullable<ScenarioParts['friction']>): FrictionFactorOptions {
   return {
     ...(f.method === undefined ? {} : { method: f.method }),
     ...(f.transition === undefined ? {} : { transition: f.transition }),
@@ -196,7 +197,7 @@ function friction(f: NonNullable<ScenarioParts['friction']>): FrictionFactorOpti
   };
 }
 
-function uniqueNames(
+export function uniqueNames(
   sink: IssueSink,
   items: readonly { readonly name: string }[] | undefined,
   field: string,
@@ -214,7 +215,7 @@ function uniqueNames(
   });
 }
 
-function limits(
+export function limits(
   sink: IssueSink,
   l: NonNullable<ScenarioParts['limits']>,
   atmosphere: Pressure,
@@ -258,7 +259,7 @@ function checkSystem(
 }
 
 /** The suction line must be the first runs of the line, none of them a parallel group. */
-function checkSuctionLine(sink: IssueSink, parts: ScenarioParts): void {
+function checkSuctionLine(sink: IssueSink, parts: LineParts): void {
   const n = parts.pumpLocation?.suctionRuns;
   if (n === undefined) return;
   const at = ['pumpLocation', 'suctionRuns'];
@@ -282,7 +283,7 @@ function checkSuctionLine(sink: IssueSink, parts: ScenarioParts): void {
   }
 }
 
-function checkProfile(sink: IssueSink, parts: ScenarioParts): void {
+export function checkProfile(sink: IssueSink, parts: ScenarioParts): void {
   const total = (parts.profile ?? []).reduce((sum, row) => sum + row.hours, 0);
   if (total > HOURS_IN_A_LEAP_YEAR) {
     report(
@@ -298,7 +299,57 @@ function checkProfile(sink: IssueSink, parts: ScenarioParts): void {
  * Puts the checked parts together into a design; reports every problem it finds through
  * `sink` and returns undefined when there was one.
  */
-export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInput | undefined {
+export function assembleDesign(
+  sink: IssueSink,
+  parts: ScenarioParts,
+): DesignInput | NetworkDesignInput | undefined {
+  if (parts.nodes !== undefined || parts.links !== undefined) return assembleNetwork(sink, parts);
+  const form = lineForm(sink, parts);
+  if (form === undefined) return undefined;
+  return assembleLine(sink, form);
+}
+
+/** A line-form file: the ends, the line and a duty flow, each required. */
+type LineParts = ScenarioParts & {
+  readonly suction: NonNullable<ScenarioParts['suction']>;
+  readonly discharge: NonNullable<ScenarioParts['discharge']>;
+  readonly line: NonNullable<ScenarioParts['line']>;
+  readonly duty: { readonly flow: NonNullable<ScenarioParts['duty']['flow']> };
+};
+
+/** The line form's required parts, each reported at its path when missing. */
+function lineForm(sink: IssueSink, parts: ScenarioParts): LineParts | undefined {
+  let ok = true;
+  for (const key of ['suction', 'discharge', 'line'] as const) {
+    if (parts[key] === undefined) {
+      report(
+        sink,
+        'INVALID_ARGUMENT',
+        'this field is required (or describe a network with nodes and links)',
+        [key],
+      );
+      ok = false;
+    }
+  }
+  if (parts.duty.service !== undefined) {
+    report(
+      sink,
+      'INVALID_ARGUMENT',
+      'service pressures are a duty of the network form (nodes and links); a line takes a duty flow',
+      ['duty', 'service'],
+    );
+    ok = false;
+  }
+  for (const key of ['pumpElevation'] as const) {
+    if (parts[key] !== undefined) {
+      report(sink, 'INVALID_ARGUMENT', 'a field of the network form (nodes and links)', [key]);
+      ok = false;
+    }
+  }
+  return ok ? (parts as LineParts) : undefined;
+}
+
+function assembleLine(sink: IssueSink, parts: LineParts): DesignInput | undefined {
   let problems = 0;
   const counting: IssueSink = {
     dataset: sink.dataset,
@@ -405,7 +456,7 @@ export function assembleDesign(sink: IssueSink, parts: ScenarioParts): DesignInp
  * The site's atmosphere: `atmosphere` as given, the standard atmosphere at `site.elevation`,
  * or the standard atmosphere at sea level; both given is a problem at `site`.
  */
-function siteAtmosphere(sink: IssueSink, parts: ScenarioParts): Pressure {
+export function siteAtmosphere(sink: IssueSink, parts: ScenarioParts): Pressure {
   if (parts.atmosphere !== undefined && parts.site !== undefined) {
     report(
       sink,

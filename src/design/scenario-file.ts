@@ -13,7 +13,7 @@ import { guardArray, guardOptions, guardString } from '../guards';
 import { assembleDesign } from './scenario-build';
 import { ScenarioFileError, type ScenarioIssue, scenarioIssues } from './scenario-issues';
 import { SCENARIO_FORMAT, scenarioObject } from './scenario-schema';
-import type { DesignInput } from './types';
+import type { DesignInput, NetworkDesignInput } from './types';
 
 export { SCENARIO_FORMAT };
 
@@ -28,7 +28,7 @@ export { SCENARIO_FORMAT };
  */
 export const scenarioSchema = v.pipe(
   scenarioObject,
-  v.rawTransform<v.InferOutput<typeof scenarioObject>, DesignInput>(
+  v.rawTransform<v.InferOutput<typeof scenarioObject>, DesignInput | NetworkDesignInput>(
     (ctx) => assembleDesign(ctx, ctx.dataset.value) ?? ctx.NEVER,
   ),
 );
@@ -129,6 +129,33 @@ function parseJson(text: string, source: string | undefined): unknown {
  * ```
  */
 export function readScenario(json: unknown, options?: ReadScenarioOptions | null): DesignInput {
+  const design = readDesignFile(json, options);
+  if ('network' in design) {
+    const source = guardOptions<ReadScenarioOptions>('options', options).source;
+    throw new HeadflowError(
+      'INVALID_ARGUMENT',
+      `${typeof source === 'string' ? source : 'the scenario'} describes a network (nodes and links): read it with readDesignFile(), which returns a NetworkDesignInput for the network form.`,
+      { parameter: 'nodes', allowed: 'a line-form scenario (suction, discharge, line)' },
+    );
+  }
+  return design;
+}
+
+/**
+ * Reads a scenario file of either form: the line form (`suction`, `discharge`, `line`) into a
+ * {@link DesignInput}, the network form (`nodes`, `links`) into a {@link NetworkDesignInput};
+ * `evaluateDesign` takes both. Errors as {@link readScenario}.
+ *
+ * @example
+ * ```ts
+ * const design = readDesignFile(readFileSync('booster.json', 'utf8'), { source: 'booster.json' });
+ * const report = evaluateDesign(design);
+ * ```
+ */
+export function readDesignFile(
+  json: unknown,
+  options?: ReadScenarioOptions | null,
+): DesignInput | NetworkDesignInput {
   const o = guardOptions<ReadScenarioOptions>('options', options);
   const source = o.source === undefined ? undefined : guardString('options.source', o.source, 1000);
   if (typeof json === 'string') guardString('json', json, MAX_SCENARIO_LENGTH);

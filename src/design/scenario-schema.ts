@@ -627,6 +627,13 @@ const frictionSchema = obj({
   allowLargeRoughness: opt(flag('accept relative roughness above 0.1')),
 });
 
+/** What a case changes in the network form. */
+const networkCaseFields = {
+  levels: opt(v.record(v.string(), quantity('length', 'any', 'surface level by node id'))),
+  demands: opt(v.record(v.string(), quantity('flow', 'any', 'demand by node id'))),
+  status: opt(v.record(v.string(), choice('link status', ['open', 'closed'] as const))),
+};
+
 const operatingCase = obj({
   name: text('case name'),
   suction: opt(endpoint(true)),
@@ -634,6 +641,7 @@ const operatingCase = obj({
   temperature: opt(quantity('temperature')),
   aged: opt(flag('aged pipe')),
   friction: opt(frictionSchema),
+  ...networkCaseFields,
 });
 
 const fitSchema = v.variant(
@@ -735,6 +743,91 @@ const candidate = v.pipe(
   ),
 );
 
+/** A node of the network form: a junction, a fixed-level surface or an outlet. */
+const networkNode = v.pipe(
+  oneOf(
+    obj(
+      {
+        id: text('node id'),
+        elevation: quantity(
+          'length',
+          'any',
+          'elevation above the datum (of the liquid surface, for a surface)',
+        ),
+        demand: opt(quantity('flow', 'any', 'flow drawn off at a junction (negative: fed in)')),
+        surface: opt(
+          oneOf(
+            obj(
+              {
+                pressure: opt(pressure('absolute', 'pressure on the surface')),
+                gaugePressure: opt(pressure('gauge', 'gauge pressure on the surface')),
+              },
+              'a fixed-level surface',
+            ),
+            ['pressure', 'gaugePressure'],
+            true,
+          ),
+        ),
+        outlet: opt(
+          obj(
+            {
+              ratedFlow: quantity('flow', 'positive', 'flow at the rated pressure'),
+              ratedPressure: pressure('gauge', 'gauge pressure at the rated flow'),
+              exponent: opt(plainNumber('exponent n of Q = k p^n', 0.3, 3)),
+            },
+            'an outlet rated by a flow at a pressure',
+          ),
+        ),
+        x: opt(plainNumber('x of the node in a schematic', Number.NEGATIVE_INFINITY)),
+        y: opt(plainNumber('y of the node in a schematic (up)', Number.NEGATIVE_INFINITY)),
+      },
+      'a node',
+    ),
+    ['demand', 'surface', 'outlet'],
+    true,
+  ),
+);
+
+/** A control valve of the network form. */
+const controlValve = obj(
+  {
+    kind: choice('control valve kind', [
+      'pressure-reducing',
+      'pressure-sustaining',
+      'flow-limiting',
+    ] as const),
+    setting: v.union(
+      [quantity('flow', 'positive'), pressure('gauge', 'held pressure')],
+      expecting(
+        'a flow (flow-limiting) or a pressure (pressure-reducing, -sustaining) with its unit',
+      ),
+    ),
+    diameter: quantity('length', 'positive', 'diameter the wide-open K refers to'),
+    openK: plainNumber('K when wide open', 0),
+  },
+  'a control valve',
+);
+
+/** A link of the network form: a pipe run, the pump (`"pump": "candidates"`) or a control valve. */
+const networkLink = oneOf(
+  obj(
+    {
+      id: text('link id'),
+      from: text('node id at the start (flow is positive from here)'),
+      to: text('node id at the end'),
+      run: opt(run),
+      checkValve: opt(flag('a check valve: no flow from to to from')),
+      pump: opt(
+        v.literal('candidates', expecting('"candidates" (the candidate pumps go in this link)')),
+      ),
+      valve: opt(controlValve),
+      status: opt(choice('link status', ['open', 'closed'] as const)),
+    },
+    'a link',
+  ),
+  ['run', 'pump', 'valve'],
+);
+
 const velocityRange = v.pipe(
   obj({ min: quantity('velocity', 'nonNegative'), max: quantity('velocity', 'positive') }),
 );
@@ -769,14 +862,48 @@ export const scenarioFields = {
   friction: opt(frictionSchema),
   aged: opt(flag('aged pipe in the design case')),
   fluid: fluidSchema,
-  suction: about(endpoint(false), 'where the liquid comes from (a surface or a point)'),
-  discharge: about(endpoint(false), 'where the liquid goes (a surface or a point)'),
-  line: about(
-    list(lineElement, 'line elements (runs and parallel groups)', 1),
-    'the line from suction to discharge, in flow order',
+  suction: opt(about(endpoint(false), 'where the liquid comes from (a surface or a point)')),
+  discharge: opt(about(endpoint(false), 'where the liquid goes (a surface or a point)')),
+  line: opt(
+    about(
+      list(lineElement, 'line elements (runs and parallel groups)', 1),
+      'the line from suction to discharge, in flow order',
+    ),
+  ),
+  nodes: opt(about(list(networkNode, 'nodes', 2), 'the network form: its nodes')),
+  links: opt(
+    about(
+      list(networkLink, 'links', 1),
+      'the network form: its links; the one with "pump": "candidates" takes the candidate pumps',
+    ),
+  ),
+  pumpElevation: opt(
+    quantity(
+      'length',
+      'any',
+      'network form: elevation of the impeller eye (default the suction node)',
+    ),
   ),
   cases: opt(list(operatingCase, 'operating cases')),
-  duty: about(obj({ flow: quantity('flow', 'positive') }), 'the flow the pumps must deliver'),
+  duty: about(
+    oneOf(
+      obj({
+        flow: opt(quantity('flow', 'positive')),
+        service: opt(
+          list(
+            obj({
+              node: text('node id'),
+              minPressure: pressure('gauge', 'the lowest pressure the node may have'),
+            }),
+            'service pressures',
+            1,
+          ),
+        ),
+      }),
+      ['flow', 'service'],
+    ),
+    'the flow the pumps must deliver, or (network form) the minimum pressures at nodes',
+  ),
   pumpLocation: opt(
     obj({
       elevation: quantity('length'),
@@ -866,7 +993,12 @@ export const scenarioFields = {
 };
 
 /** The shape of a scenario file, every part read (before assembly). */
-export const scenarioObject = obj(scenarioFields, 'a scenario');
+export const scenarioObject = v.pipe(
+  obj(scenarioFields, 'a scenario'),
+  v.metadata({
+    oneOf: [{ required: ['suction', 'discharge', 'line'] }, { required: ['nodes', 'links'] }],
+  }),
+);
 
 /** A scenario file as read, every part checked, before assembly into a design. */
 export type ScenarioParts = v.InferOutput<typeof scenarioObject>;

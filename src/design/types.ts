@@ -6,6 +6,7 @@
  */
 
 import type { Fluid } from '../fluids/index';
+import type { LinkState, NetworkCase, NetworkDefinition } from '../network/index';
 import type {
   CataloguePoint,
   FitReport,
@@ -183,6 +184,98 @@ export interface DesignInput {
   readonly intake?: IntakeInput;
 }
 
+/** A minimum pressure at a node of a network (absolute; a scenario file gives it as gauge). */
+export interface ServicePressure {
+  readonly node: string;
+  /** The lowest absolute pressure the node may have. */
+  readonly minPressure: Pressure;
+}
+
+/**
+ * The whole problem on a network: the network in its design case, the link where the
+ * candidate pumps go, the operating cases, and the duty, which is either a flow through the
+ * pump link (`dutyFlow`) or service pressures (`service`): the least pump head that gives every
+ * listed node at least its minimum pressure. Everything else is as {@link DesignInput}.
+ */
+export interface NetworkDesignInput {
+  readonly name: string;
+  /** The network in its design case. */
+  readonly network: NetworkDefinition;
+  /**
+   * Id of the link where the candidate pumps go (from its `from` node, the suction, to its `to`
+   * node, the discharge). It may be a pump link (its curve is replaced by each candidate's) or
+   * any other link (replaced by the pump).
+   */
+  readonly pumpLink: string;
+  /** Elevation of the impeller eye, for NPSH; default the suction node's elevation. */
+  readonly pumpElevation?: Length;
+  readonly fluidName?: string;
+  /** Operating cases of the network; with none, the design case alone is evaluated. */
+  readonly cases?: readonly NetworkCase[];
+  /** A flow through the pump link (give this or `service`). */
+  readonly dutyFlow?: Flow;
+  /** Minimum pressures at nodes, the same in every case (give this or `dutyFlow`). */
+  readonly service?: readonly ServicePressure[];
+  readonly candidates?: readonly CandidateInput[];
+  /** Hours a year at each flow (default: the design case's duty flow for 8760 h). */
+  readonly profile?: readonly ProfileRow[];
+  readonly energyPrice?: { readonly perKWh: number; readonly currency: string };
+  /** Check limits (`designPressure` is checked at every node on the discharge side). */
+  readonly limits?: DesignLimits;
+  readonly units?: UnitSystem;
+  /** Atmospheric pressure at the site (absolute); default the network's atmosphere. */
+  readonly atmosphere?: Pressure;
+  /** Where to draw each node in a schematic (any consistent units, y up), by node id. */
+  readonly coordinates?: Readonly<Record<string, { readonly x: number; readonly y: number }>>;
+}
+
+/** A node of a network at a solution, for the report's node table (SI, pressures absolute). */
+export interface NodeRow {
+  readonly id: string;
+  readonly kind: 'junction' | 'surface' | 'outlet';
+  readonly elevation: Length;
+  readonly head: Length;
+  readonly pressure: Pressure;
+  /** Flow leaving the network there (demand, outlet discharge, flow into a surface). */
+  readonly outflow: Flow;
+  /** The service minimum (absolute), when one is set. */
+  readonly minPressure: Pressure | undefined;
+  /** How far the pressure is below the minimum (Pa, > 0), when it is. */
+  readonly shortfall: Pressure | undefined;
+  readonly isolated: boolean;
+}
+
+/** A link of a network at a solution, for the report's link table (SI). */
+export interface LinkRow {
+  readonly id: string;
+  readonly kind: 'run' | 'pump' | 'valve';
+  readonly from: string;
+  readonly to: string;
+  readonly flow: Flow;
+  readonly velocity: Velocity | undefined;
+  /** Head at `from` minus head at `to` (negative across a running pump). */
+  readonly headLoss: Length;
+  readonly reynolds: number | undefined;
+  readonly frictionFactor: number | undefined;
+  readonly state: LinkState;
+}
+
+/** The network solved at one case's duty, for the node and link tables. */
+export interface NetworkTables {
+  /** Id of the pump link. */
+  readonly pumpLink: string;
+  /** How the duty was set: a flow through the pump link, or service pressures. */
+  readonly duty: 'flow' | 'service';
+  readonly nodes: readonly NodeRow[];
+  readonly links: readonly LinkRow[];
+  /** Linear solves of the network solution shown and its final residuals. */
+  readonly iterations: number;
+  readonly headResidual: number;
+  readonly flowResidual: number;
+  /** Solves the duty search made (flow duty or service duty). */
+  readonly searchSolves: number;
+}
+
 /** How serious a check's finding is. `error` fails the candidate (or the design). */
 export type Severity = 'error' | 'warning' | 'info';
 
@@ -269,6 +362,12 @@ export interface CaseDuty {
   readonly dischargePressure: Pressure;
   /** Every run's figures at the duty flow. */
   readonly runs: readonly RunDetails[];
+  /**
+   * On a network: the duty flow of this case (the flow through the pump link at the duty
+   * head; with service pressures it changes from case to case), and the whole network solved
+   * at the duty (node and link tables).
+   */
+  readonly network?: { readonly dutyFlow: Flow; readonly tables: NetworkTables };
 }
 
 /** Where a candidate runs in one operating case. */
@@ -298,6 +397,8 @@ export interface CaseResult {
   readonly specificEnergy: number | undefined;
   /** Root-finder iterations for the operating point (and the speed, under speed control). */
   readonly iterations: number;
+  /** On a network: the whole network at this operating point (node and link tables). */
+  readonly network?: NetworkTables;
 }
 
 /** A candidate's evaluation. */
@@ -502,6 +603,30 @@ export interface DesignReport {
   readonly passed: boolean;
   /** Curves for charts, when asked for (`evaluateDesign(input, { curves: true })`). */
   readonly curves: ReportCurves | undefined;
+  /**
+   * On a network: the layout (nodes with any coordinates the input gives, links with their
+   * ends), the pump link and the service pressures; absent for a line.
+   */
+  readonly network?: NetworkLayout;
+}
+
+/** A network's layout, restated in a report. */
+export interface NetworkLayout {
+  readonly pumpLink: string;
+  readonly nodes: readonly {
+    readonly id: string;
+    readonly kind: 'junction' | 'surface' | 'outlet';
+    readonly elevation: Length;
+    readonly x?: number;
+    readonly y?: number;
+  }[];
+  readonly links: readonly {
+    readonly id: string;
+    readonly kind: 'run' | 'pump' | 'valve';
+    readonly from: string;
+    readonly to: string;
+  }[];
+  readonly service: readonly ServicePressure[];
 }
 
 /** Display units of each unit system (for renderers and the CLI). */

@@ -52,6 +52,12 @@ export const MAX_STATE_CHANGES = 8;
 /** Largest flow change, relative to the largest flow, at which link states are revised. */
 const SETTLED = 0.01;
 
+/**
+ * Flows below this (m3/s, 3.6 uL/h) are the rounding of the heads of a network at rest: states
+ * are revised when every flow is below it.
+ */
+const REST_FLOW = 1e-12;
+
 /** Ulps of a head equation's terms that rounding alone can leave in a node's flow balance. */
 const ROUNDING = 32 * Number.EPSILON;
 
@@ -624,7 +630,9 @@ function solveModel(
     // can show reverse flows or heads that the solution does not have.
     changed = pinned;
     const tol = o.headTolerance;
-    const settled = change <= SETTLED * largest;
+    // A network at rest (every flow below REST_FLOW, the rounding of its heads) has settled
+    // too: relative to a largest flow of rounding size no change would ever count as settled.
+    const settled = change <= SETTLED * largest || largest <= REST_FLOW;
     revised = settled;
     for (let k = 0; k < total; k++) {
       if (!settled) break;

@@ -28,6 +28,7 @@ import {
   formatNumber,
   formatPercent,
 } from './format-values';
+import { networkBlocks } from './network-tables';
 
 /** A table column: its header (lines split by `\n`) and how its cells align. */
 export interface Column {
@@ -724,9 +725,12 @@ export function reportBlocks(
     blocks.push(dutyTable(report, s));
     if (!options.summary) {
       report.duty.forEach((d, k) => {
+        if (d.network !== undefined) return;
         blocks.push({ kind: 'subheading', text: `Run losses at the duty flow: ${d.case}` });
         blocks.push(runLossTable(report, k, s));
       });
+      // A network: its nodes and links at each case's duty (network-tables.ts).
+      blocks.push(...networkBlocks(report, s));
       const npsh = npshTable(report, s);
       if (npsh !== undefined) {
         blocks.push({ kind: 'subheading', text: 'NPSH available at the duty flow, by term' }, npsh);

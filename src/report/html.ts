@@ -10,6 +10,7 @@ import { renderChart } from './chart';
 import { chartSpecFromReport } from './chart-from-report';
 import { type Block, type Column, reportBlocks } from './format-document';
 import { chosenUnits } from './format-values';
+import { renderSchematic } from './schematic';
 
 /** Options of {@link renderHtml}. */
 export interface HtmlOptions {
@@ -174,6 +175,11 @@ export function renderHtml(report: DesignReport, options: HtmlOptions | null = {
         );
         parts.push(
           `<figure class="chart">${svg}<figcaption>Pump and system curves, operating points (numbered, see the key under the chart) and duty points of each case.</figcaption></figure>`,
+        );
+      }
+      if (report.network !== undefined) {
+        parts.push(
+          `<figure class="chart schematic">${renderSchematic(report, { units: system })}<figcaption>The network at the duty of the first case: gauge pressure at each node, flow and velocity in each link.</figcaption></figure>`,
         );
       }
       return;

@@ -41,6 +41,7 @@ export {
   reportToPlain,
 } from './json';
 export { type MarkdownOptions, renderMarkdown } from './markdown';
+export { renderSchematic, type SchematicOptions } from './schematic';
 export {
   renderSelection,
   SELECTION_FORMAT,

@@ -32,6 +32,7 @@ import {
   type UnitOf,
 } from '../units/index';
 import { chosenUnits } from './format-values';
+import { networkJson } from './network-tables';
 
 /** The `format` tag of the envelope; the number changes when the shape changes incompatibly. */
 export const REPORT_FORMAT = 'headflow-report/2';
@@ -128,6 +129,8 @@ export interface JsonCaseDuty {
   /** Pressure at the discharge end: absolute and gauge. */
   readonly dischargePressure: JsonEndPressure;
   readonly runs: readonly JsonRun[];
+  /** On a network: the duty flow of the case and the node and link tables at the duty. */
+  readonly network?: { readonly dutyFlow: JsonQuantity | null } & ReturnType<typeof networkJson>;
 }
 
 /** An end's pressure both ways, in the report's pressure unit. */
@@ -388,6 +391,14 @@ function duty(
     suctionPressure: endPressure(d.suctionPressure, atmosphere, u),
     dischargePressure: endPressure(d.dischargePressure, atmosphere, u),
     runs: d.runs.map((r) => run(r, u)),
+    ...(d.network === undefined
+      ? {}
+      : {
+          network: {
+            dutyFlow: quantity(d.network.dutyFlow, u.flow),
+            ...networkJson(d.network.tables, atmosphere, u),
+          },
+        }),
   };
 }
 

@@ -47,6 +47,26 @@ run(
   0,
   (r) => r.stdout.startsWith('Pump selection: Canal lift to hillside tank'),
 );
+const schematic = join(out, 'booster.svg');
+run(
+  'booster-floors.json (a network, service pressures): the drive set passes; schematic written',
+  [example('booster-floors.json'), '--schematic', schematic, '-f', 'json'],
+  0,
+  (r) => {
+    const envelope = JSON.parse(r.stdout);
+    return (
+      envelope.report.verdict.recommended === 'booster B-40, drive' &&
+      envelope.report.duty[0].network.nodes.length === 15 &&
+      readFileSync(schematic, 'utf8').includes('</svg>')
+    );
+  },
+);
+run(
+  'ring-main.json (a looped network with a control valve) passes',
+  [example('ring-main.json')],
+  0,
+  (r) => r.stdout.includes('Network at the duty: peak draw'),
+);
 run(
   'a missing file is invalid input',
   [join(out, 'missing.json')],

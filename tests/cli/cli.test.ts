@@ -269,3 +269,31 @@ describe('headflow: an internal error exits 3', () => {
     expect(c2.err()).toContain('not an Error');
   });
 });
+
+describe('a network scenario on the command line', () => {
+  const BOOSTER = readFileSync(
+    new URL('../../docs/examples/booster-floors.json', import.meta.url),
+    'utf8',
+  );
+  it('evaluates it, prints the node tables and writes the schematic', async () => {
+    const c = memoryIo({ 'b.json': BOOSTER });
+    const code = await runCli(['b.json', '--schematic', 'b.svg'], c.io);
+    expect(code).toBe(EXIT.passed);
+    expect(c.out()).toContain('Network at the duty: break tank full');
+    expect(c.files.get('b.svg')).toContain('class="schematic"');
+  });
+  it('refuses --schematic for a line, select on a network, and the same file twice', async () => {
+    const line = memoryIo({ 'l.json': EXAMPLE });
+    expect(await runCli(['l.json', '--schematic', 'x.svg'], line.io)).toBe(EXIT.invalidInput);
+    expect(line.err()).toContain('--schematic draws a network');
+    const net = memoryIo({ 'b.json': BOOSTER, 'p.json': '{}' });
+    expect(await runCli(['select', 'b.json', '--catalogue', 'p.json'], net.io)).toBe(
+      EXIT.invalidInput,
+    );
+    expect(net.err()).toContain('describes a network');
+    const same = memoryIo({ 'b.json': BOOSTER });
+    expect(await runCli(['b.json', '--chart', 'a.svg', '--schematic', 'a.svg'], same.io)).toBe(
+      EXIT.invalidInput,
+    );
+  });
+});

@@ -16,12 +16,15 @@ describe('docs/scenario.schema.json', () => {
     expect(JSON.parse(committed)).toEqual(JSON.parse(scenarioJsonSchemaText()));
   });
 
-  it('forbids unknown fields and requires the format, name, fluid, ends, line and duty', () => {
+  it('forbids unknown fields and requires the format, name, fluid, duty and one form', () => {
     const schema: Node = scenarioJsonSchema();
     expect(schema.additionalProperties).toBe(false);
-    expect(schema.required).toEqual(
-      expect.arrayContaining(['format', 'name', 'fluid', 'suction', 'discharge', 'line', 'duty']),
-    );
+    expect(schema.required).toEqual(expect.arrayContaining(['format', 'name', 'fluid', 'duty']));
+    // The line form (ends and line) or the network form (nodes and links).
+    expect(schema.oneOf).toEqual([
+      { required: ['suction', 'discharge', 'line'] },
+      { required: ['nodes', 'links'] },
+    ]);
   });
 
   it('describes quantities as text with a pattern, a description and an example', () => {

@@ -169,6 +169,22 @@ describe('getting started', () => {
   });
 });
 
+describe('network design example', () => {
+  it('reads the booster file, evaluates it and prints each duty with the top floor at its minimum', async () => {
+    const log = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+    const mod = (await import('../../docs/examples/network-design')) as { svg: string };
+    const lines = log.mock.calls.map((c) => String(c[0]));
+    log.mockRestore();
+    expect(lines).toEqual([
+      'break tank full: 45.1 m at 27.34 m3/h, top floor 200 kPa gauge',
+      'break tank low: 45.9 m at 27.34 m3/h, top floor 200 kPa gauge',
+      'recommended: booster B-40, drive, passed: true',
+    ]);
+    expect(read('docs/network.md')).toContain(lines.join('\n'));
+    expect(mod.svg.trimEnd().endsWith('</svg>')).toBe(true);
+  });
+});
+
 describe('every example file', () => {
   const files = readdirSync(new URL('docs/examples/', root)).filter((f) => f.endsWith('.ts'));
   const quoted = pages.map(read).join('\n');

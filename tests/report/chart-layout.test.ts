@@ -10,8 +10,8 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { XMLParser } from 'fast-xml-parser';
 import { describe, expect, it } from 'vitest';
-import { evaluateDesign, readScenario } from '../../src/design/index';
-import { chartSpecFromReport, renderChart } from '../../src/report/index';
+import { evaluateDesign, readDesignFile } from '../../src/design/index';
+import { chartSpecFromReport, renderChart, renderSchematic } from '../../src/report/index';
 import { scenarioExampleFiles } from '../helpers/examples';
 import { REPORT } from './fixture';
 
@@ -192,7 +192,7 @@ describe('the chart test itself', () => {
 describe('no label overlaps, leaves the drawing or is cut short', () => {
   const files = scenarioExampleFiles();
   for (const file of files) {
-    const report = evaluateDesign(readScenario(readFileSync(join(DIR, file), 'utf8')), {
+    const report = evaluateDesign(readDesignFile(readFileSync(join(DIR, file), 'utf8')), {
       curves: true,
     });
     for (const units of ['si', 'us'] as const) {
@@ -243,5 +243,57 @@ describe('no label overlaps, leaves the drawing or is cut short', () => {
       ),
       { numRuns: 25 },
     );
+  });
+});
+
+describe("the network schematic's labels do not overlap, leave the drawing or get cut short", () => {
+  for (const file of scenarioExampleFiles()) {
+    const design = readDesignFile(readFileSync(join(DIR, file), 'utf8'));
+    if (!('network' in design)) continue;
+    const report = evaluateDesign(design);
+    for (const units of ['si', 'us'] as const) {
+      for (const width of [900, 600]) {
+        for (const d of report.duty) {
+          it(`${file}, ${d.case}, ${units}, ${width} px wide`, () => {
+            const svg = renderSchematic(report, { units, width, case: d.case });
+            expect(problems(svg)).toEqual([]);
+            // Every node and link is labelled: in the drawing, or by number in the key.
+            const texts = measure(svg).texts.map((t) => t.text);
+            for (const n of report.network?.nodes ?? []) {
+              expect(
+                texts.some((t) => t.includes(`${n.id}: `)),
+                n.id,
+              ).toBe(true);
+            }
+          });
+        }
+      }
+    }
+  }
+});
+
+describe('the schematic at a candidate that leaves nodes short', () => {
+  const design = readDesignFile(readFileSync(join(DIR, 'booster-floors.json'), 'utf8'));
+  const report = evaluateDesign(design);
+  it('marks every node below its service minimum and keeps its labels clear', () => {
+    const svg = renderSchematic(report, { candidate: 'booster C-32, fixed', units: 'us' });
+    expect(problems(svg)).toEqual([]);
+    const short = report.candidates
+      .find((c) => c.name === 'booster C-32, fixed')
+      ?.checks.filter((k) => k.id === 'service-pressure' && k.case === report.duty[0]?.case)
+      .map((k) => k.words['node']);
+    expect(short?.length).toBeGreaterThan(0);
+    for (const id of short ?? []) {
+      expect(svg).toMatch(new RegExp(`class="node outlet below-service"[^>]*><title>${id}<`));
+      expect(svg).toContain(`${id}: `);
+    }
+    expect(svg).toContain('(below service minimum)');
+  });
+  it('refuses a line report, an unknown case or candidate, a bad width', () => {
+    const line = evaluateDesign(readDesignFile(readFileSync(join(DIR, 'canal-lift.json'), 'utf8')));
+    expect(() => renderSchematic(line)).toThrow(/network/);
+    expect(() => renderSchematic(report, { case: 'flood' })).toThrow(/case/);
+    expect(() => renderSchematic(report, { candidate: 'nobody' })).toThrow(/candidate/);
+    expect(() => renderSchematic(report, { width: 100 })).toThrow(/width/);
   });
 });

@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { EXIT, runCli } from '../../src/cli/run';
-import { evaluateDesign, readScenario } from '../../src/design/index';
+import { evaluateDesign, readDesignFile, readScenario } from '../../src/design/index';
 import { renderHtml, renderJson, renderMarkdown, renderText } from '../../src/report/index';
 import { si, to } from '../../src/units/index';
 import { scenarioExampleFiles } from '../helpers/examples';
@@ -71,7 +71,7 @@ function leaks(text: string, symbols: readonly string[], bracketed: string): str
 describe('every example file speaks one unit system', () => {
   it('has example files to test', () => expect(FILES.length).toBeGreaterThan(1));
   for (const file of FILES) {
-    const design = readScenario(readFileSync(join(DIR, file), 'utf8'));
+    const design = readDesignFile(readFileSync(join(DIR, file), 'utf8'));
     const report = evaluateDesign(design, { curves: true });
     for (const units of ['si', 'us'] as const) {
       it(`${file} in ${units}: text, Markdown and HTML`, () => {
@@ -86,6 +86,8 @@ describe('every example file speaks one unit system', () => {
           ...report.duty.map((d) => d.case),
           ...report.candidates.map((c) => c.name),
           ...report.inputs.runs.map((r) => r.name),
+          ...(report.network?.nodes.map((n) => n.id) ?? []),
+          ...(report.network?.links.map((l) => l.id) ?? []),
         ].sort((a, b) => b.length - a.length);
         for (const raw of outputs) {
           let out = raw;

@@ -48,7 +48,7 @@ export { noOperatingPointCheck } from './no-operating-point';
 export { npshNoDataCheck, npshNoVaporPressureCheck } from './npsh-data';
 export { npshMarginCheck } from './npsh-margin';
 export { preferredRegionCheck } from './preferred-region';
-export { shutoffPressureCheck } from './shutoff-pressure';
+export { SHUTOFF_SOURCE, shutoffPressureCheck } from './shutoff-pressure';
 export { surgeMessage } from './surge';
 export { velocityCheck } from './velocity';
 export { viscousCorrection, viscousCorrectionMessage } from './viscous-correction';

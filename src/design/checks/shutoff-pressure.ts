@@ -6,7 +6,8 @@
 import type { Check } from '../types';
 import { type CheckInfo, check } from './check';
 
-const SOURCE =
+/** Source of the shut-off pressure check. */
+export const SHUTOFF_SOURCE =
   'ASME B31.1/B31.3 and local pressure-equipment codes (design pressure covers the highest pressure the pump can make)';
 
 export const SHUTOFF_PRESSURE: CheckInfo = {
@@ -15,7 +16,7 @@ export const SHUTOFF_PRESSURE: CheckInfo = {
   inputs:
     "limits.designPressure; the set's shut-off head; suction pressure and height in each case",
   severity: 'error when the shut-off pressure exceeds the design pressure',
-  source: SOURCE,
+  source: SHUTOFF_SOURCE,
 };
 
 /** The check in a case, or undefined when the design pressure covers shut-off. */
@@ -32,6 +33,6 @@ export function shutoffPressureCheck(
     candidate,
     caseName,
     { maxPressure, designPressure },
-    SOURCE,
+    SHUTOFF_SOURCE,
   );
 }
