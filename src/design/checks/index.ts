@@ -23,6 +23,7 @@ import { NO_OPERATING_POINT } from './no-operating-point';
 import { NPSH_DATA } from './npsh-data';
 import { NPSH_MARGIN } from './npsh-margin';
 import { PREFERRED_REGION } from './preferred-region';
+import { NODE_BELOW_ATMOSPHERE, NODE_VAPOUR_PRESSURE, SERVICE_PRESSURE } from './service-pressure';
 import { SHUTOFF_PRESSURE } from './shutoff-pressure';
 import { SURGE, surge } from './surge';
 import { VELOCITY } from './velocity';
@@ -74,6 +75,9 @@ export const CHECKS: readonly CheckInfo[] = [
   SURGE,
   LOW_FLOW_HEATING,
   INTAKE_SUBMERGENCE,
+  SERVICE_PRESSURE,
+  NODE_VAPOUR_PRESSURE,
+  NODE_BELOW_ATMOSPHERE,
 ];
 
 /** Checks of each operating case, run by `evaluateDesign` in turn: add a file, add it here. */

@@ -6,11 +6,35 @@
  */
 import type { NetworkSolution } from '../../network/index';
 import type { Check, ServicePressure } from '../types';
-import { check } from './check';
+import { type CheckInfo, COMMON, check } from './check';
 
 /** Where the service minimum comes from. */
 export const SERVICE_SOURCE =
   'the design input (service pressures the owner or the local plumbing code asks for)';
+
+export const SERVICE_PRESSURE: CheckInfo = {
+  id: 'service-pressure',
+  guards: 'an outlet or floor that gets too little pressure (a network with service minimums)',
+  inputs: '`duty.service` (node and minimum pressure); the network solved with the candidate',
+  severity: 'error for every node below its minimum, with the shortfall',
+  source: SERVICE_SOURCE,
+};
+
+export const NODE_VAPOUR_PRESSURE: CheckInfo = {
+  id: 'node-vapour-pressure',
+  guards: 'a steady result that is not physical: the liquid would boil (column separation)',
+  inputs: 'the solved pressure at every node of a network; the liquid vapour pressure',
+  severity: 'error at every node below the vapour pressure',
+  source: COMMON,
+};
+
+export const NODE_BELOW_ATMOSPHERE: CheckInfo = {
+  id: 'node-below-atmosphere',
+  guards: 'air drawn in at leaks, joints and air valves where the pressure is below atmospheric',
+  inputs: 'the solved pressure at every node of a network (surfaces excepted); the atmosphere',
+  severity: 'warning at every node below the atmosphere',
+  source: COMMON,
+};
 
 /**
  * Shortfalls below this fraction of the minimum (absolute; 1e-4 Pa at 1 bar) are round-off of
