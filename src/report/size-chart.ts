@@ -18,7 +18,7 @@ export interface SizeChartOptions {
   /** Width of the chart, px (100 to 20000, default 800); widened where its labels need room. */
   readonly width?: number;
   /** Currency of the costs, written in the axis label (default 'currency of the prices'). */
-  readonly currency?: string;
+  readonly currency?: string | undefined;
   /** Title (default 'Life-cycle cost against pipe size'). */
   readonly title?: string;
 }
