@@ -1,13 +1,14 @@
 // example: docs/examples/select-canal-lift.ts
 // Ranks the invented pump catalogue for the invented canal lift, by life-cycle cost over
 // 20 years, then sizes the rising main with it. Prices and pipe costs are invented.
-import { readFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
   economicPipeSize,
   formatQuantity,
   pipeSize,
   readCatalogue,
   readScenario,
+  renderSizeChart,
   selectPumps,
 } from 'headflow';
 
@@ -58,3 +59,10 @@ console.log(`economic size: NPS ${sizing.best?.sizes[0]?.nps} (${sizing.search})
 // NPS 6: pipe 50400 EUR, life-cycle 226989 EUR with 65-200/2900, variable speed
 // NPS 8: pipe 73500 EUR, life-cycle 226894 EUR with 65-200/2900, variable speed
 // economic size: NPS 8 (exhaustive)
+
+// The same table as a chart: pipe cost and pump life-cycle cost stacked for each size.
+mkdirSync('.demo', { recursive: true });
+writeFileSync(
+  '.demo/canal-lift-sizes.svg',
+  renderSizeChart(sizing, { currency: catalogue.currency }),
+);

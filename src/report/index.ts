@@ -47,4 +47,5 @@ export {
   SELECTION_FORMAT,
   type SelectionRenderOptions,
 } from './selection';
+export { renderSizeChart, type SizeChartOptions } from './size-chart';
 export { renderText, type TextOptions } from './text';
