@@ -12,6 +12,7 @@ import {
   guardBoolean,
   guardFunction,
   guardInteger,
+  guardNumber,
   guardRecord,
   guardResult,
   guardString,
@@ -170,6 +171,14 @@ function valveK(valve: ValveCoefficient, diameter: Length, name: string): number
   return valve.k as number;
 }
 
+/** The words of a catalogue size (nominal size, schedule, DN) that reports print. */
+function checkPipeNames(path: string, pipe: unknown): void {
+  const p = guardRecord(path, pipe);
+  guardString(`${path}.nps`, p['nps']);
+  guardString(`${path}.schedule`, p['schedule']);
+  if (p['dn'] !== undefined) guardNumber(`${path}.dn`, p['dn']);
+}
+
 /**
  * Validates a pipe run and fixes its roughness (new, or aged when `aged` is true).
  *
@@ -192,6 +201,8 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
   const name = input.name === undefined ? `run ${position}` : guardString('name', input.name);
   checkNonNegative(`${name}.length`, input.length, 'm');
   let diameter: number;
+  // A catalogue size is restated in reports by its name: its words are checked here too.
+  if (input.pipe !== undefined) checkPipeNames(`${name}.pipe`, input.pipe);
   if (input.insideDiameter !== undefined) {
     checkPositive(`${name}.insideDiameter`, input.insideDiameter, 'm');
     diameter = input.insideDiameter;

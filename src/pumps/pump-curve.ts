@@ -167,6 +167,20 @@ export function pumpCurve(input: PumpCurveInput): PumpCurve {
   return new ScaledCurve(base, 1, 1);
 }
 
+/**
+ * A frozen copy of a checked catalogue point with only the fields a point has: the caller's
+ * other keys (an extra field, an own `__proto__`) are not carried into the curve.
+ */
+function cataloguePointCopy(p: CataloguePoint): CataloguePoint {
+  return Object.freeze({
+    flow: p.flow,
+    head: p.head,
+    ...(p.efficiency === undefined ? {} : { efficiency: p.efficiency }),
+    ...(p.npshRequired === undefined ? {} : { npshRequired: p.npshRequired }),
+    ...(p.shaftPower === undefined ? {} : { shaftPower: p.shaftPower }),
+  });
+}
+
 function buildBase(input: PumpCurveInput): Base {
   const { points } = guardRecord('input', input) as unknown as PumpCurveInput;
   checkPositive('speed', input.speed, 'rad/s');
@@ -478,7 +492,7 @@ function buildBase(input: PumpCurveInput): Base {
     allowable,
     speed: input.speed,
     diameter: input.impellerDiameter,
-    points: Object.freeze(points.map((p) => Object.freeze({ ...p }))),
+    points: Object.freeze(points.map(cataloguePointCopy)),
     fits: {
       head: head.report,
       efficiency: efficiency?.report,

@@ -29,13 +29,22 @@ const scenario = fc.tuple(example, uniform(0.6, 1.3)).map(([i, factor]) => {
   return file;
 });
 
+// Reports with their sampled curves (the chart needs them) and without (the default).
+const CURVED: readonly DesignReport[] = EXAMPLES.map((file) =>
+  api.evaluateDesign(api.readScenario(file), { curves: true }),
+);
 const REPORTS: readonly DesignReport[] = [
   ...EXAMPLES.map((file) => api.evaluateDesign(api.readScenario(file))),
+  ...CURVED,
   fixtureReport,
 ];
 const report = fc.oneof(
   { weight: 1, arbitrary: fc.constantFrom(...REPORTS) },
   { weight: 2, arbitrary: fc.constant(REPORTS[2] as DesignReport) },
+);
+const curvedReport = fc.oneof(
+  { weight: 1, arbitrary: fc.constantFrom(...CURVED) },
+  { weight: 2, arbitrary: fc.constant(CURVED[2] as DesignReport) },
 );
 const unitSystem = fc.constantFrom('si', 'us');
 const noNanText = (out: unknown): void => {
@@ -96,13 +105,16 @@ export const documentEntries: readonly FuzzEntry[] = [
   },
   {
     name: 'chartSpecFromReport',
-    valid: fc.tuple(report, optionsOf(fc.record({ units: unitSystem }, { requiredKeys: [] }))),
+    valid: fc.tuple(
+      curvedReport,
+      optionsOf(fc.record({ units: unitSystem }, { requiredKeys: [] })),
+    ),
     call: api.chartSpecFromReport,
   },
   {
     name: 'renderChart',
     valid: fc.tuple(
-      report.map((r) => api.chartSpecFromReport(r)),
+      curvedReport.map((r) => api.chartSpecFromReport(r)),
       optionsOf(
         fc.record(
           {
