@@ -34,13 +34,14 @@ export function applyNetworkCase(
   const nodes = guardArray('nodes', def.nodes);
   const links = guardArray('links', def.links);
   const nodeById = new Map<string, number>();
+  // Nodes and links are copied into the case's definition: each must be an object.
   nodes.forEach((n, i) => {
-    const id = (n as { id?: unknown } | null)?.id;
+    const id = guardRecord(`definition.nodes[${i}]`, n)['id'];
     if (typeof id === 'string') nodeById.set(id, i);
   });
   const linkById = new Map<string, number>();
   links.forEach((l, i) => {
-    const id = (l as { id?: unknown } | null)?.id;
+    const id = guardRecord(`definition.links[${i}]`, l)['id'];
     if (typeof id === 'string') linkById.set(id, i);
   });
   const newNodes = nodes.slice() as Record<string, unknown>[];

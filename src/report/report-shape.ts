@@ -40,6 +40,8 @@ const optStr: Shape = { t: 'string', optional: true };
 // A missing or non-finite number is printed as a dash; another type is refused.
 const num: Shape = { t: 'number', optional: true };
 const count: Shape = { t: 'number', finite: true };
+// A number the renderer computes with (rounds, sums): present, finite or not.
+const reqNum: Shape = { t: 'number' };
 const bool: Shape = { t: 'boolean', optional: true };
 const oneOf = (values: readonly string[], optional = false): Shape => ({
   t: 'oneOf',
@@ -353,4 +355,78 @@ export function checkReportShape(report: DesignReport): void {
   const r = guardRecord('report', report);
   checkPlainData(r);
   checkShape('report', r, rec(REPORT));
+}
+
+// ---------------------------------------------------------------- a pump selection
+
+const COST = rec({ amount: num, currency: str }, true);
+
+const SELECTION_CASE = rec({
+  case: str,
+  failure: optStr,
+  speed: num,
+  flow: num,
+  head: num,
+  efficiency: num,
+  percentOfBep: num,
+  npshMargin: num,
+  npshRatio: num,
+  throttleHead: num,
+  throttlePower: num,
+  inputPower: num,
+  energy: rec({ kWh: reqNum, cost: COST }, true),
+});
+
+const SELECTION_ENTRY = rec({
+  rank: reqNum,
+  name: str,
+  method: oneOf(['throttle', 'trim', 'speed']),
+  label: str,
+  trimDiameter: num,
+  trimRatio: num,
+  trimIterations: num,
+  trimBasis: oneOf(['trim law', 'interpolated', 'catalogue curve'], true),
+  speed: num,
+  passed: bool,
+  checks: list(CHECK),
+  cases: list(SELECTION_CASE),
+  motor: MOTOR(true),
+  energy: rec({ kWh: reqNum, cost: COST }, true),
+  lifeCycleCost: rec(
+    {
+      total: reqNum,
+      initial: num,
+      installation: num,
+      energy: num,
+      operation: num,
+      maintenance: num,
+      downtime: num,
+      environmental: num,
+      decommissioning: num,
+    },
+    true,
+  ),
+});
+
+const SELECTION: Fields = {
+  name: str,
+  catalogue: optStr,
+  dutyFlow: num,
+  duty: list(DUTY),
+  cautions: list(str),
+  costs: { t: 'map', of: num, optional: true },
+  ranked: list(SELECTION_ENTRY),
+  rankedBy: oneOf(['life-cycle cost', 'energy']),
+  currency: optStr,
+  systemChecks: list(CHECK, true),
+  notes: list(str, true),
+};
+
+/**
+ * Throws `INVALID_ARGUMENT` naming the first part of a pump selection (from `selectPumps`)
+ * that has the wrong shape for its renderer. Its ways' curves, candidates and reports are not
+ * printed and not checked.
+ */
+export function checkSelectionShape(selection: unknown): void {
+  checkShape('selection', selection, rec(SELECTION));
 }

@@ -9,9 +9,17 @@ import * as root from '../../src/index';
 import { basicEntries } from './entries/basics';
 import { documentEntries } from './entries/documents';
 import { machineEntries } from './entries/machines';
+import { networkEntries } from './entries/network';
+import { selectionEntries } from './entries/selection';
 import { FUZZ_RUNS } from './harness';
 
-const ENTRIES = [...basicEntries, ...machineEntries, ...documentEntries];
+const ENTRIES = [
+  ...basicEntries,
+  ...machineEntries,
+  ...documentEntries,
+  ...networkEntries,
+  ...selectionEntries,
+];
 
 function functionsOf(module: Record<string, unknown>): Map<string, unknown> {
   return new Map(Object.entries(module).filter(([, v]) => typeof v === 'function'));

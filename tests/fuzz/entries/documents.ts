@@ -47,6 +47,11 @@ const curvedReport = fc.oneof(
   { weight: 2, arbitrary: fc.constant(CURVED[2] as DesignReport) },
 );
 const unitSystem = fc.constantFrom('si', 'us');
+/** Every check of the reports: the messages checkMessage rebuilds. */
+const CHECKS: readonly api.Check[] = REPORTS.flatMap((r) => [
+  ...r.checks,
+  ...r.candidates.flatMap((c) => c.checks),
+]);
 const noNanText = (out: unknown): void => {
   const text = typeof out === 'string' ? out : JSON.stringify(out);
   if (/\bNaN\b|Infinity/.test(text)) throw new Error('a rendered report shows NaN or Infinity');
@@ -126,6 +131,42 @@ export const documentEntries: readonly FuzzEntry[] = [
       ),
     ),
     call: api.renderChart,
+    check: noNanText,
+  },
+  {
+    name: 'renderHtml',
+    // The chart needs the sampled curves: `chart: true` only with a report that has them.
+    valid: fc.oneof(
+      fc.tuple(
+        report,
+        optionsOf(
+          fc.record(
+            { units: unitSystem, summary: fc.boolean(), chart: fc.constant(false) },
+            { requiredKeys: [] },
+          ),
+        ),
+      ),
+      fc.tuple(
+        curvedReport,
+        optionsOf(
+          fc.record(
+            { units: unitSystem, summary: fc.boolean(), chart: fc.boolean() },
+            { requiredKeys: [] },
+          ),
+        ),
+      ),
+    ),
+    call: api.renderHtml,
+    check: noNanText,
+  },
+  {
+    name: 'checkMessage',
+    valid: fc.tuple(
+      fc.constantFrom(...CHECKS),
+      unitSystem,
+      fc.constantFrom('ascii', 'unicode', undefined),
+    ),
+    call: api.checkMessage,
     check: noNanText,
   },
   {
