@@ -12,6 +12,8 @@ import {
   guardRecord,
   guardString,
 } from '../guards';
+import { buildModel } from './model';
+import { buildTopology } from './topology';
 import type { NetworkCase, NetworkDefinition } from './types';
 
 /**
@@ -19,13 +21,30 @@ import type { NetworkCase, NetworkDefinition } from './types';
  * and pressures, link statuses, valve settings, pump speeds, pumps, aged pipe and fluid.
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for an id the network does not hold or that names
- *   a node or link of another kind (a level for a junction, a setting for a run).
+ *   a node or link of another kind (a level for a junction, a setting for a run), and what
+ *   `prepareNetwork` throws for the case's network.
  * @example
  * ```ts
  * const low = applyNetworkCase(definition, { name: 'low tank', levels: { tank: q(8, 'm') } });
  * ```
  */
 export function applyNetworkCase(
+  definition: NetworkDefinition,
+  operatingCase: NetworkCase,
+): NetworkDefinition {
+  const result = caseDefinition(definition, operatingCase);
+  // The case's network is checked as prepareNetwork checks one (links, ends, numbers), so
+  // that what is handed back is a network that can be solved or refused here.
+  buildModel(buildTopology(result), result);
+  return result;
+}
+
+/**
+ * {@link applyNetworkCase} without the final check of the network, for a prepared network
+ * whose solve builds (and so checks) the case's model itself.
+ * @internal
+ */
+export function caseDefinition(
   definition: NetworkDefinition,
   operatingCase: NetworkCase,
 ): NetworkDefinition {

@@ -182,10 +182,8 @@ export const networkEntries: readonly FuzzEntry[] = [
   {
     // The solve method of a prepared network, with a case and options.
     name: 'prepareNetwork',
-    valid: fc
-      .tuple(networkWithCase, solveOptions)
-      .map(([[d, c], o]) => [api.prepareNetwork(d), c, o]),
-    call: (p: api.PreparedNetwork, c: NetworkCase, o: never) => p.solve(c, o),
+    valid: fc.tuple(networkWithCase, solveOptions).map(([[d, c], o]) => [d, c, o]),
+    call: (d: NetworkDefinition, c: NetworkCase, o: never) => api.prepareNetwork(d).solve(c, o),
     validMayThrow: ['NO_SOLUTION', 'OUT_OF_RANGE'],
     runs: NETWORK_RUNS,
   },
