@@ -14,7 +14,6 @@ import {
   type Check,
   checkMessage,
   closureSurgeHead,
-  type DesignReport,
   economicPipeSize,
   evaluateDesign,
   HeadflowError,
