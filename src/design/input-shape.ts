@@ -24,6 +24,9 @@ import type { DesignInput } from './types';
  */
 export const MAX_PROFILE_FLOW = 1e3;
 
+/** Smallest motor or drive efficiency a design takes: the scenario reader's `SMALLEST_FRACTION`. */
+export const SMALLEST_EFFICIENCY = 1e-3;
+
 /** Largest number of candidates, cases and profile rows a design takes. */
 const MAX_ITEMS = 1000;
 
@@ -58,6 +61,20 @@ export function checkDesignShape(input: DesignInput): void {
         guardFunction(`${at}.pump.${m}`, pump[m]);
       }
       guardRange(`${at}.pump.speed`, pump['speed'], { min: 0, minOpen: true, unit: 'rad/s' });
+      // An efficiency of 1e-300 would carry an input power of Infinity into the report: below
+      // the scenario reader's smallest fraction (0.1 %) it is refused, as the reader refuses it.
+      for (const k of ['motorEfficiency', 'driveEfficiency'] as const) {
+        const eff = candidate[k];
+        if (typeof eff === 'number' && eff > 0 && eff < SMALLEST_EFFICIENCY) {
+          throw argumentError(
+            'OUT_OF_RANGE',
+            `${at}.${k}`,
+            eff,
+            undefined,
+            `${SMALLEST_EFFICIENCY} to 1`,
+          );
+        }
+      }
       if (candidate['motorSeries'] !== undefined) {
         guardOneOf(`${at}.motorSeries`, candidate['motorSeries'], ['nema', 'iec'] as const);
       }

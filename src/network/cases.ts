@@ -126,8 +126,15 @@ export function caseDefinition(
     need(l['pump'] !== undefined, name, 'the id of a pump link');
     return { ...l, pump: guardRecord(name, v) };
   });
+  // The definition's own fields only (not an extra key of the caller's, an own `__proto__`).
+  const own = (k: keyof NetworkDefinition) => (def[k] === undefined ? {} : { [k]: def[k] });
   return {
-    ...def,
+    ...own('name'),
+    fluid: def.fluid,
+    ...own('g'),
+    ...own('friction'),
+    ...own('aged'),
+    ...own('atmosphere'),
     ...(c.name !== undefined ? { name: guardString('operatingCase.name', c.name) } : {}),
     ...(c.fluid !== undefined ? { fluid: c.fluid } : {}),
     ...(c.aged !== undefined ? { aged: guardBoolean('operatingCase.aged', c.aged) } : {}),

@@ -247,7 +247,8 @@ function checkFluid(fluid: FluidState, suction: Endpoint): void {
  * (2011), eq. 3.73 and section 6.9 (multiple-pipe systems).
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for impossible runs, endpoints or fluid;
- *   `OUT_OF_RANGE` when the fluid boils at the suction pressure; `UNKNOWN_NAME` for an unknown
+ *   `OUT_OF_RANGE` when the fluid boils at the suction pressure or is denser than 1e5 kg/m3
+ *   (no liquid is; rho g Q H would overflow); `UNKNOWN_NAME` for an unknown
  *   fitting or material.
  * @example
  * ```ts

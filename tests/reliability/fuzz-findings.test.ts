@@ -17,6 +17,8 @@ import {
   economicPipeSize,
   evaluateDesign,
   HeadflowError,
+  joukowskyHead,
+  lifeCycleCost,
   minimumSubmergence,
   type NetworkDefinition,
   outletCoefficient,
@@ -32,7 +34,11 @@ import {
   reportToPlain,
   restraintFactor,
   selectPumps,
+  solveNetwork,
   systemCurve,
+  temperatureRise,
+  water,
+  waveSpeed,
 } from '../../src/index';
 
 const example = (name: string): string =>
@@ -187,6 +193,38 @@ describe('results that would overflow are refused with OUT_OF_RANGE', () => {
   });
 });
 
+describe('more results that would overflow, found by longer local runs', () => {
+  it('temperatureRise at a density of 5e-324 kg/m3', () => {
+    const e = refusal(() =>
+      temperatureRise(10 as never, 0 as never, 5e-324 as never, 1500 as never, 1 as never),
+    );
+    expect(e.code).toBe('OUT_OF_RANGE');
+  });
+
+  it('joukowskyHead of a velocity change of 1.8e308 m/s', () => {
+    expect(refusal(() => joukowskyHead(100 as never, Number.MAX_VALUE as never)).code).toBe(
+      'OUT_OF_RANGE',
+    );
+  });
+
+  it('waveSpeed in a liquid of 1e-300 kg/m3', () => {
+    const input = { bulkModulus: 1.8e8, density: 1e-300 };
+    expect(refusal(() => waveSpeed(input as never)).code).toBe('OUT_OF_RANGE');
+  });
+
+  it('lifeCycleCost of yearly costs near the largest number', () => {
+    const e = refusal(() => lifeCycleCost({ operationPerYear: Number.MAX_VALUE }));
+    expect(e.code).toBe('OUT_OF_RANGE');
+  });
+
+  it('evaluateDesign with a motor efficiency of 9.3e-301 (an input power of Infinity)', () => {
+    const candidates = ORCHARD.candidates?.map((c) => ({ ...c, motorEfficiency: 9.3e-301 }));
+    const e = refusal(() => evaluateDesign({ ...ORCHARD, ...(candidates ? { candidates } : {}) }));
+    expect(e.code).toBe('OUT_OF_RANGE');
+    expect(e.parameter).toBe('candidates[0].motorEfficiency');
+  });
+});
+
 describe('objects handed back keep only what they describe', () => {
   it("a pump curve's catalogue points drop the caller's extra keys (an own __proto__)", () => {
     const first = JSON.parse('{"flow":0,"head":5,"efficiency":0,"__proto__":[null]}') as object;
@@ -209,6 +247,33 @@ describe('objects handed back keep only what they describe', () => {
     } as unknown as NetworkDefinition;
     const e = refusal(() => applyNetworkCase(definition, { name: 'night', demands: {} }));
     expect(e.parameter).toBe('definition.nodes[1]');
+  });
+
+  it("applyNetworkCase keeps only a definition's own fields (not an extra __proto__ key)", () => {
+    const definition = JSON.parse(
+      '{"name":"two tanks","nodes":[{"id":"a","elevation":10,"surface":{}},{"id":"b","elevation":0,"surface":{}}],"links":[{"id":"ab","from":"a","to":"b","run":{"length":10,"insideDiameter":0.1,"roughness":0}}],"__proto__":[1]}',
+    ) as Record<string, unknown>;
+    const withFluid = {
+      ...definition,
+      fluid: water().at(q(20, 'degC')),
+    } as unknown as NetworkDefinition;
+    const result = applyNetworkCase(withFluid, { name: 'low', levels: { a: q(8, 'm') } });
+    expect(Object.keys(result)).not.toContain('__proto__');
+  });
+
+  it('solveNetwork refuses a vapour pressure that is not a number (was a TypeError)', () => {
+    const fluid = { ...water().at(q(20, 'degC')), vaporPressure: Object.create(null) };
+    const definition = {
+      fluid,
+      nodes: [
+        { id: 'a', elevation: 10, surface: {} },
+        { id: 'b', elevation: 0, surface: {} },
+      ],
+      links: [
+        { id: 'ab', from: 'a', to: 'b', run: { length: 10, insideDiameter: 0.1, roughness: 0 } },
+      ],
+    } as unknown as NetworkDefinition;
+    expect(refusal(() => solveNetwork(definition)).parameter).toBe('fluid.vaporPressure');
   });
 
   it('CatalogueFileError constructs with any arguments (null issues included)', () => {
