@@ -39,6 +39,32 @@ export function applyNetworkCase(
   return result;
 }
 
+/** The fields of a node and of a link: a changed node or link is copied with these only. */
+const NODE_KEYS = ['id', 'elevation', 'demand', 'surface', 'outlet'] as const;
+const LINK_KEYS = [
+  'id',
+  'from',
+  'to',
+  'status',
+  'run',
+  'checkValve',
+  'pump',
+  'speed',
+  'count',
+  'arrangement',
+  'valve',
+] as const;
+
+/** A copy of `item` with the given fields only (not an extra key, not an own `__proto__`). */
+function known(
+  item: Readonly<Record<string, unknown>>,
+  keys: readonly string[],
+): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const k of keys) if (Object.hasOwn(item, k)) out[k] = item[k];
+  return out;
+}
+
 /**
  * {@link applyNetworkCase} without the final check of the network, for a prepared network
  * whose solve builds (and so checks) the case's model itself.
@@ -72,6 +98,7 @@ export function caseDefinition(
     target: Record<string, unknown>[],
     change: (item: Record<string, unknown>, v: unknown, name: string) => Record<string, unknown>,
   ): void => {
+    const keys = target === newNodes ? NODE_KEYS : LINK_KEYS;
     if (value === undefined) return;
     const record = guardRecord(`operatingCase.${field}`, value);
     for (const [id, v] of Object.entries(record)) {
@@ -86,7 +113,7 @@ export function caseDefinition(
           `an id of the network's ${byId === nodeById ? 'nodes' : 'links'}`,
         );
       }
-      target[i] = change(guardRecord(name, target[i]), v, name);
+      target[i] = change(known(guardRecord(name, target[i]), keys), v, name);
     }
   };
   const need = (ok: boolean, name: string, what: string): void => {

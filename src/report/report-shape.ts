@@ -224,7 +224,6 @@ const SAMPLED = list(
     flows: list(num),
     values: list(num),
   }),
-  true,
 );
 
 const CURVES = rec(
@@ -234,8 +233,8 @@ const CURVES = rec(
     efficiency: SAMPLED,
     npshRequired: SAMPLED,
     npshAvailable: SAMPLED,
-    preferredRegions: list(rec({ name: str, group: optStr, minFlow: num, maxFlow: num }), true),
-    points: list(rec({ name: str, candidate: optStr, case: optStr, flow: num, head: num }), true),
+    preferredRegions: list(rec({ name: str, group: optStr, minFlow: num, maxFlow: num })),
+    points: list(rec({ name: str, candidate: optStr, case: optStr, flow: num, head: num })),
     dutyPoints: list(rec({ case: str, flow: num, head: num }), true),
   },
   true,

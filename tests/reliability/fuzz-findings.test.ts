@@ -12,6 +12,7 @@ import {
   applyNetworkCase,
   CatalogueFileError,
   type Check,
+  chartSpecFromReport,
   checkMessage,
   closureSurgeHead,
   economicPipeSize,
@@ -28,6 +29,7 @@ import {
   readCatalogue,
   readScenario,
   renderHtml,
+  renderJson,
   renderMarkdown,
   renderSelection,
   renderText,
@@ -94,6 +96,13 @@ describe('the report renderers check every field of the calculation sheet they r
   it('refuses a report without its verdict (was a TypeError reading candidates)', () => {
     const bad = edited(report, ['verdict']);
     expect(refusal(() => renderHtml(bad)).parameter).toBe('report.verdict');
+  });
+
+  it('refuses curves without their list of systems (was a TypeError in the chart and JSON)', () => {
+    const curved = evaluateDesign(ORCHARD, { curves: true });
+    const bad = edited(curved, ['curves', 'systems']);
+    expect(refusal(() => renderJson(bad)).parameter).toBe('report.curves.systems');
+    expect(refusal(() => chartSpecFromReport(bad)).parameter).toBe('report.curves.systems');
   });
 
   it('still renders every example report unchanged', () => {
@@ -259,6 +268,11 @@ describe('objects handed back keep only what they describe', () => {
     } as unknown as NetworkDefinition;
     const result = applyNetworkCase(withFluid, { name: 'low', levels: { a: q(8, 'm') } });
     expect(Object.keys(result)).not.toContain('__proto__');
+    // A node the case changes is copied with a node's fields only.
+    const node = JSON.parse('{"id":"a","elevation":10,"surface":{},"__proto__":[1],"extra":2}');
+    const two = { ...withFluid, nodes: [node, withFluid.nodes[1]] } as NetworkDefinition;
+    const low = applyNetworkCase(two, { levels: { a: q(8, 'm') } });
+    expect(Object.keys(low.nodes[0] as object)).toEqual(['id', 'elevation', 'surface']);
   });
 
   it('solveNetwork refuses a vapour pressure that is not a number (was a TypeError)', () => {
