@@ -234,15 +234,19 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
   const valves = guardArray(`${name}.valves`, input.valves ?? [], { max: 10_000 });
   for (const [i, v] of valves.entries()) {
     const at = `${name}.valves[${i}]`;
-    kSum += valveK(guardRecord(at, v) as ValveCoefficient, diameter as Length, at);
+    const valve = guardRecord(at, v);
+    // Names are restated in reports: each must be a string.
+    if (valve['name'] !== undefined) guardString(`${at}.name`, valve['name']);
+    kSum += valveK(valve as ValveCoefficient, diameter as Length, at);
   }
   if (input.fittings !== undefined) guardArray(`${name}.fittings`, input.fittings, { max: 10_000 });
   const components = guardArray(`${name}.components`, input.components ?? [], { max: 10_000 });
   for (const [i, c] of components.entries()) {
-    guardFunction(
-      `${name}.components[${i}].headLoss`,
-      guardRecord(`${name}.components[${i}]`, c)['headLoss'],
-    );
+    const component = guardRecord(`${name}.components[${i}]`, c);
+    guardFunction(`${name}.components[${i}].headLoss`, component['headLoss']);
+    if (component['name'] !== undefined) {
+      guardString(`${name}.components[${i}].name`, component['name']);
+    }
   }
   if (input.elevationChange !== undefined)
     checkFinite(`${name}.elevationChange`, input.elevationChange, 'm');

@@ -126,6 +126,13 @@ describe('the design and the selection check their input at the entry', () => {
     expect(e.parameter).toBe('suction.pipe.nps');
   });
 
+  it('refuses a valve whose name is not a string (was restated as NaN in the report)', () => {
+    const run = ORCHARD.system.runs[1] as unknown as Record<string, unknown>;
+    const runs = [ORCHARD.system.runs[0], { ...run, valves: [{ name: Number.NaN, k: 2 }] }];
+    const bad = { ...ORCHARD, system: { ...ORCHARD.system, runs } };
+    expect(refusal(() => evaluateDesign(bad as never)).parameter).toBe('delivery.valves[0].name');
+  });
+
   it('refuses a profile flow past the physical range instead of reporting a flow of Infinity', () => {
     const bad = { ...ORCHARD, profile: [{ flow: 9e297 as never, hours: 100 }] };
     const e = refusal(() => evaluateDesign(bad));
