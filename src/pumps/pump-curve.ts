@@ -89,6 +89,9 @@ interface Base {
 
 const GRID = 512;
 
+/** Smallest efficiency of a catalogue point above zero flow (0.1 %). */
+const MIN_POINT_EFFICIENCY = 1e-3;
+
 /** The k-th of GRID + 1 evenly spaced flows from a to b, landing exactly on b at k = GRID. */
 function gridFlow(a: number, b: number, k: number): number {
   return k === GRID ? b : a + ((b - a) * k) / GRID;
@@ -144,7 +147,7 @@ function gridFlow(a: number, b: number, k: number): number {
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for fewer than 3 points, a negative or
  *   non-increasing flow, a head that is not positive or rises with flow, an efficiency outside
- *   (0, 1], efficiency on some points only, both efficiency and shaft power, shaft power
+ *   [0.001, 1] (0 only at zero flow), efficiency on some points only, both efficiency and shaft power, shaft power
  *   without `catalogueDensity`, a fit that cannot be made or leaves its bounds, or bad
  *   regions; `OUT_OF_RANGE` from the curve's methods outside the data.
  * @example
@@ -250,13 +253,19 @@ function buildBase(input: PumpCurveInput): Base {
     if (p.efficiency !== undefined) {
       const e = p.efficiency;
       const zeroFlowZero = flow === 0 && e === 0;
-      if (typeof e !== 'number' || !Number.isFinite(e) || ((e <= 0 || e > 1) && !zeroFlowZero)) {
+      // Below 0.1 % (the scenario reader's smallest fraction) the shaft power rho g Q H / eta
+      // would run to Infinity for no pump there is.
+      if (
+        typeof e !== 'number' ||
+        !Number.isFinite(e) ||
+        ((e < MIN_POINT_EFFICIENCY || e > 1) && !zeroFlowZero)
+      ) {
         throw argumentError(
           'INVALID_ARGUMENT',
           `points[${i}].efficiency`,
           e,
           undefined,
-          '0 < efficiency <= 1 (a fraction; 0 only at zero flow)',
+          `${MIN_POINT_EFFICIENCY} <= efficiency <= 1 (a fraction; 0 only at zero flow)`,
         );
       }
       if (flow === 0 && e !== 0) {

@@ -263,7 +263,8 @@ const REPORT: Fields = {
 
 /** Checks `value` at `path` against `shape`, throwing `INVALID_ARGUMENT` naming the field. */
 function checkShape(path: string, value: unknown, shape: Shape): void {
-  if ((value === undefined || value === null) && shape.optional) return;
+  // Absent is `undefined` (a report's own form); `null` is refused where the renderer reads on.
+  if (value === undefined && shape.optional) return;
   switch (shape.t) {
     case 'string':
       guardString(path, value, 100_000);

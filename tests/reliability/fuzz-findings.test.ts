@@ -242,6 +242,16 @@ describe('more results that would overflow, found by longer local runs', () => {
 });
 
 describe('objects handed back keep only what they describe', () => {
+  it('pumpCurve refuses a catalogue efficiency of 5.55e-301 (a selection reported Infinity power)', () => {
+    const points = [
+      { flow: 0 as never, head: 50 as never, efficiency: 0 },
+      { flow: 0.01 as never, head: 45 as never, efficiency: 5.55e-301 },
+      { flow: 0.02 as never, head: 35 as never, efficiency: 0.7 },
+    ];
+    const e = refusal(() => pumpCurve({ speed: 300 as never, points }));
+    expect(e.parameter).toBe('points[1].efficiency');
+  });
+
   it("a pump curve's catalogue points drop the caller's extra keys (an own __proto__)", () => {
     const first = JSON.parse('{"flow":0,"head":5,"efficiency":0,"__proto__":[null]}') as object;
     const p = pumpCurve({
