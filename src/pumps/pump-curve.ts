@@ -91,6 +91,9 @@ const GRID = 512;
 
 /** Smallest efficiency of a catalogue point above zero flow (0.1 %). */
 const MIN_POINT_EFFICIENCY = 1e-3;
+/** Largest flow (m3/s) and head (m) of a catalogue point: the physical ranges of a file. */
+const MAX_POINT_FLOW = 1e3;
+const MAX_POINT_HEAD = 1e6;
 
 /** The k-th of GRID + 1 evenly spaced flows from a to b, landing exactly on b at k = GRID. */
 function gridFlow(a: number, b: number, k: number): number {
@@ -147,9 +150,10 @@ function gridFlow(a: number, b: number, k: number): number {
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for fewer than 3 points, a negative or
  *   non-increasing flow, a head that is not positive or rises with flow, an efficiency outside
- *   [0.001, 1] (0 only at zero flow), efficiency on some points only, both efficiency and shaft power, shaft power
- *   without `catalogueDensity`, a fit that cannot be made or leaves its bounds, or bad
- *   regions; `OUT_OF_RANGE` from the curve's methods outside the data.
+ *   [0.001, 1] (0 only at zero flow), efficiency on some points only, both efficiency and
+ *   shaft power, shaft power without `catalogueDensity`, a fit that cannot be made or leaves
+ *   its bounds, or bad regions; `OUT_OF_RANGE` for a point's flow above 1000 m3/s or head
+ *   above 1e6 m, and from the curve's methods outside the data.
  * @example
  * ```ts
  * const pump = pumpCurve({
@@ -225,6 +229,20 @@ function buildBase(input: PumpCurveInput): Base {
         'm3/s',
         'a finite flow >= 0',
       );
+    }
+    // Past the physical ranges (1000 m3/s, 1e6 m: those of the scenario reader) the power
+    // rho g Q H of a point would overflow in the checks built on it.
+    if (flow > MAX_POINT_FLOW) {
+      throw argumentError(
+        'OUT_OF_RANGE',
+        `points[${i}].flow`,
+        flow,
+        'm3/s',
+        `<= ${MAX_POINT_FLOW}`,
+      );
+    }
+    if (typeof head === 'number' && head > MAX_POINT_HEAD) {
+      throw argumentError('OUT_OF_RANGE', `points[${i}].head`, head, 'm', `<= ${MAX_POINT_HEAD}`);
     }
     if (i > 0 && !(flow > (q[i - 1] as number))) {
       throw argumentError(

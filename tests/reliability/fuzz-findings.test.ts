@@ -252,6 +252,17 @@ describe('objects handed back keep only what they describe', () => {
     expect(e.parameter).toBe('points[1].efficiency');
   });
 
+  it('pumpCurve refuses a catalogue head of 9.8e301 m (a selection reported a flow of Infinity)', () => {
+    const points = [
+      { flow: 0 as never, head: 9.8e301 as never, efficiency: 0 },
+      { flow: 0.01 as never, head: 45 as never, efficiency: 0.6 },
+      { flow: 0.02 as never, head: 35 as never, efficiency: 0.7 },
+    ];
+    const e = refusal(() => pumpCurve({ speed: 300 as never, points }));
+    expect(e.code).toBe('OUT_OF_RANGE');
+    expect(e.parameter).toBe('points[0].head');
+  });
+
   it("a pump curve's catalogue points drop the caller's extra keys (an own __proto__)", () => {
     const first = JSON.parse('{"flow":0,"head":5,"efficiency":0,"__proto__":[null]}') as object;
     const p = pumpCurve({
