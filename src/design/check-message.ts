@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { guardOneOf, guardRecord, guardString } from '../guards';
+import { guardNumber, guardOneOf, guardRecord, guardString } from '../guards';
 import { type Pressure, to } from '../units/index';
 import { intakeSubmergenceMessage } from './checks/intake-submergence';
 import { lowFlowHeatingMessage } from './checks/low-flow-heating';
@@ -169,7 +169,12 @@ export function checkMessage(
   const system = guardOneOf('units', units, ['si', 'us'] as const);
   const symbols = guardOneOf('style', style, ['ascii', 'unicode'] as const);
   const values = c['values'] === undefined ? {} : guardRecord('check.values', c['values']);
+  for (const [k, v] of Object.entries(values)) {
+    // Missing or non-finite numbers are said as a dash; other kinds cannot be said.
+    if (v !== undefined && typeof v !== 'number') guardNumber(`check.values.${k}`, v);
+  }
   const words = c['words'] === undefined ? {} : guardRecord('check.words', c['words']);
+  for (const [k, w] of Object.entries(words)) guardString(`check.words.${k}`, w, 10_000);
   const known = { ...check, values: values as Check['values'], words: words as Check['words'] };
   const said = message(known, sayIn(system, symbols));
   return typeof said === 'string' ? said : '';

@@ -6,6 +6,7 @@
  *
  * @module
  */
+import { argumentError } from '../errors';
 import {
   guardArray,
   guardFunction,
@@ -16,6 +17,15 @@ import {
   guardString,
 } from '../guards';
 import type { DesignInput } from './types';
+
+/**
+ * Largest flow of a profile row (m3/s): the largest flow of `PHYSICAL_RANGE` in
+ * scenario-values.ts (a test holds the two equal).
+ */
+export const MAX_PROFILE_FLOW = 1e3;
+
+/** Smallest motor or drive efficiency a design takes: the scenario reader's `SMALLEST_FRACTION`. */
+export const SMALLEST_EFFICIENCY = 1e-3;
 
 /** Largest number of candidates, cases and profile rows a design takes. */
 const MAX_ITEMS = 1000;
@@ -51,6 +61,20 @@ export function checkDesignShape(input: DesignInput): void {
         guardFunction(`${at}.pump.${m}`, pump[m]);
       }
       guardRange(`${at}.pump.speed`, pump['speed'], { min: 0, minOpen: true, unit: 'rad/s' });
+      // An efficiency of 1e-300 would carry an input power of Infinity into the report: below
+      // the scenario reader's smallest fraction (0.1 %) it is refused, as the reader refuses it.
+      for (const k of ['motorEfficiency', 'driveEfficiency'] as const) {
+        const eff = candidate[k];
+        if (typeof eff === 'number' && eff > 0 && eff < SMALLEST_EFFICIENCY) {
+          throw argumentError(
+            'OUT_OF_RANGE',
+            `${at}.${k}`,
+            eff,
+            undefined,
+            `${SMALLEST_EFFICIENCY} to 1`,
+          );
+        }
+      }
       if (candidate['motorSeries'] !== undefined) {
         guardOneOf(`${at}.motorSeries`, candidate['motorSeries'], ['nema', 'iec'] as const);
       }
@@ -58,7 +82,20 @@ export function checkDesignShape(input: DesignInput): void {
   }
   if (input.profile !== undefined) {
     guardArray('profile', input.profile, { max: MAX_ITEMS * 100 });
-    for (const [i, row] of input.profile.entries()) guardRecord(`profile[${i}]`, row);
+    for (const [i, row] of input.profile.entries()) {
+      const flow = guardRecord(`profile[${i}]`, row)['flow'];
+      // A flow past the physical range would overflow in the energy sums (a check reporting
+      // a flow of Infinity): refused as the scenario reader refuses it.
+      if (typeof flow === 'number' && Math.abs(flow) > MAX_PROFILE_FLOW) {
+        throw argumentError(
+          'OUT_OF_RANGE',
+          `profile[${i}].flow`,
+          flow,
+          'm3/s',
+          `<= ${MAX_PROFILE_FLOW}`,
+        );
+      }
+    }
   }
   if (input.energyPrice !== undefined) {
     const price = guardRecord('energyPrice', input.energyPrice);

@@ -88,6 +88,10 @@ function guardFluid(fluid: FluidState): void {
     minOpen: true,
     unit: 'm2/s',
   });
+  // The vapour pressure is compared with every node's pressure in the solution.
+  if (f['vaporPressure'] !== undefined) {
+    guardRange('fluid.vaporPressure', f['vaporPressure'], { min: 0, unit: 'Pa' });
+  }
 }
 
 export function buildModel(topo: Topology, def: NetworkDefinition): Model {

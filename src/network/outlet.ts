@@ -3,7 +3,7 @@
  *
  * @module
  */
-import { guardRange } from '../guards';
+import { guardRange, guardResult } from '../guards';
 import type { Flow, Pressure } from '../units/index';
 
 /**
@@ -13,7 +13,8 @@ import type { Flow, Pressure } from '../units/index';
  * @param flow - rated flow (m3/s), > 0
  * @param gaugePressure - the pressure above the atmosphere at that flow (Pa), > 0
  * @param exponent - n, 0.3 to 3 (default 0.5, an orifice)
- * @throws HeadflowError `INVALID_ARGUMENT` for values outside those ranges.
+ * @throws HeadflowError `INVALID_ARGUMENT` for values outside those ranges; `OUT_OF_RANGE` where
+ *   k would overflow (a pressure near 0 to the power n).
  * @example
  * ```ts
  * outletCoefficient(q(80, 'L/min'), q(1, 'bar')); // 4.216e-6 (m3/s per Pa^0.5)
@@ -23,5 +24,6 @@ export function outletCoefficient(flow: Flow, gaugePressure: Pressure, exponent 
   const qv = guardRange('flow', flow, { min: 0, minOpen: true, unit: 'm3/s' });
   const p = guardRange('gaugePressure', gaugePressure, { min: 0, minOpen: true, unit: 'Pa' });
   const e = guardRange('exponent', exponent, { min: 0.3, max: 3 });
-  return qv / p ** e;
+  // A tiny pressure to a power can underflow to 0 (k = Infinity): refused.
+  return guardResult('coefficient', qv / p ** e, 'OUT_OF_RANGE');
 }

@@ -12,6 +12,7 @@ import {
   guardBoolean,
   guardFunction,
   guardInteger,
+  guardNumber,
   guardRecord,
   guardResult,
   guardString,
@@ -170,6 +171,14 @@ function valveK(valve: ValveCoefficient, diameter: Length, name: string): number
   return valve.k as number;
 }
 
+/** The words of a catalogue size (nominal size, schedule, DN) that reports print. */
+function checkPipeNames(path: string, pipe: unknown): void {
+  const p = guardRecord(path, pipe);
+  guardString(`${path}.nps`, p['nps']);
+  guardString(`${path}.schedule`, p['schedule']);
+  if (p['dn'] !== undefined) guardNumber(`${path}.dn`, p['dn']);
+}
+
 /**
  * Validates a pipe run and fixes its roughness (new, or aged when `aged` is true).
  *
@@ -192,6 +201,8 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
   const name = input.name === undefined ? `run ${position}` : guardString('name', input.name);
   checkNonNegative(`${name}.length`, input.length, 'm');
   let diameter: number;
+  // A catalogue size is restated in reports by its name: its words are checked here too.
+  if (input.pipe !== undefined) checkPipeNames(`${name}.pipe`, input.pipe);
   if (input.insideDiameter !== undefined) {
     checkPositive(`${name}.insideDiameter`, input.insideDiameter, 'm');
     diameter = input.insideDiameter;
@@ -223,15 +234,19 @@ export function pipeRun(input: PipeRunInput, position = 1, aged = false): PipeRu
   const valves = guardArray(`${name}.valves`, input.valves ?? [], { max: 10_000 });
   for (const [i, v] of valves.entries()) {
     const at = `${name}.valves[${i}]`;
-    kSum += valveK(guardRecord(at, v) as ValveCoefficient, diameter as Length, at);
+    const valve = guardRecord(at, v);
+    // Names are restated in reports: each must be a string.
+    if (valve['name'] !== undefined) guardString(`${at}.name`, valve['name']);
+    kSum += valveK(valve as ValveCoefficient, diameter as Length, at);
   }
   if (input.fittings !== undefined) guardArray(`${name}.fittings`, input.fittings, { max: 10_000 });
   const components = guardArray(`${name}.components`, input.components ?? [], { max: 10_000 });
   for (const [i, c] of components.entries()) {
-    guardFunction(
-      `${name}.components[${i}].headLoss`,
-      guardRecord(`${name}.components[${i}]`, c)['headLoss'],
-    );
+    const component = guardRecord(`${name}.components[${i}]`, c);
+    guardFunction(`${name}.components[${i}].headLoss`, component['headLoss']);
+    if (component['name'] !== undefined) {
+      guardString(`${name}.components[${i}].name`, component['name']);
+    }
   }
   if (input.elevationChange !== undefined)
     checkFinite(`${name}.elevationChange`, input.elevationChange, 'm');

@@ -6,7 +6,7 @@
 import { HeadflowError } from '../errors';
 import { guardInteger, guardOptions, guardRange, guardRecord } from '../guards';
 import type { Flow, Length, Pressure, Velocity } from '../units/index';
-import { applyNetworkCase } from './cases';
+import { caseDefinition } from './cases';
 import {
   ACTIVE,
   CLOSED,
@@ -130,7 +130,7 @@ export function prepareNetwork(definition: NetworkDefinition): PreparedNetwork {
       const d =
         operatingCase === undefined || operatingCase === null
           ? def
-          : applyNetworkCase(def, operatingCase);
+          : caseDefinition(def, operatingCase);
       return solveModel(topo, buildModel(topo, d), o);
     },
   });

@@ -89,6 +89,12 @@ interface Base {
 
 const GRID = 512;
 
+/** Smallest efficiency of a catalogue point above zero flow (0.1 %). */
+const MIN_POINT_EFFICIENCY = 1e-3;
+/** Largest flow (m3/s) and head (m) of a catalogue point: the physical ranges of a file. */
+const MAX_POINT_FLOW = 1e3;
+const MAX_POINT_HEAD = 1e6;
+
 /** The k-th of GRID + 1 evenly spaced flows from a to b, landing exactly on b at k = GRID. */
 function gridFlow(a: number, b: number, k: number): number {
   return k === GRID ? b : a + ((b - a) * k) / GRID;
@@ -144,9 +150,10 @@ function gridFlow(a: number, b: number, k: number): number {
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for fewer than 3 points, a negative or
  *   non-increasing flow, a head that is not positive or rises with flow, an efficiency outside
- *   (0, 1], efficiency on some points only, both efficiency and shaft power, shaft power
- *   without `catalogueDensity`, a fit that cannot be made or leaves its bounds, or bad
- *   regions; `OUT_OF_RANGE` from the curve's methods outside the data.
+ *   [0.001, 1] (0 only at zero flow), efficiency on some points only, both efficiency and
+ *   shaft power, shaft power without `catalogueDensity`, a fit that cannot be made or leaves
+ *   its bounds, or bad regions; `OUT_OF_RANGE` for a point's flow above 1000 m3/s or head
+ *   above 1e6 m, and from the curve's methods outside the data.
  * @example
  * ```ts
  * const pump = pumpCurve({
@@ -165,6 +172,20 @@ function gridFlow(a: number, b: number, k: number): number {
 export function pumpCurve(input: PumpCurveInput): PumpCurve {
   const base = buildBase(input);
   return new ScaledCurve(base, 1, 1);
+}
+
+/**
+ * A frozen copy of a checked catalogue point with only the fields a point has: the caller's
+ * other keys (an extra field, an own `__proto__`) are not carried into the curve.
+ */
+function cataloguePointCopy(p: CataloguePoint): CataloguePoint {
+  return Object.freeze({
+    flow: p.flow,
+    head: p.head,
+    ...(p.efficiency === undefined ? {} : { efficiency: p.efficiency }),
+    ...(p.npshRequired === undefined ? {} : { npshRequired: p.npshRequired }),
+    ...(p.shaftPower === undefined ? {} : { shaftPower: p.shaftPower }),
+  });
 }
 
 function buildBase(input: PumpCurveInput): Base {
@@ -209,6 +230,20 @@ function buildBase(input: PumpCurveInput): Base {
         'a finite flow >= 0',
       );
     }
+    // Past the physical ranges (1000 m3/s, 1e6 m: those of the scenario reader) the power
+    // rho g Q H of a point would overflow in the checks built on it.
+    if (flow > MAX_POINT_FLOW) {
+      throw argumentError(
+        'OUT_OF_RANGE',
+        `points[${i}].flow`,
+        flow,
+        'm3/s',
+        `<= ${MAX_POINT_FLOW}`,
+      );
+    }
+    if (typeof head === 'number' && head > MAX_POINT_HEAD) {
+      throw argumentError('OUT_OF_RANGE', `points[${i}].head`, head, 'm', `<= ${MAX_POINT_HEAD}`);
+    }
     if (i > 0 && !(flow > (q[i - 1] as number))) {
       throw argumentError(
         'INVALID_ARGUMENT',
@@ -236,13 +271,19 @@ function buildBase(input: PumpCurveInput): Base {
     if (p.efficiency !== undefined) {
       const e = p.efficiency;
       const zeroFlowZero = flow === 0 && e === 0;
-      if (typeof e !== 'number' || !Number.isFinite(e) || ((e <= 0 || e > 1) && !zeroFlowZero)) {
+      // Below 0.1 % (the scenario reader's smallest fraction) the shaft power rho g Q H / eta
+      // would run to Infinity for no pump there is.
+      if (
+        typeof e !== 'number' ||
+        !Number.isFinite(e) ||
+        ((e < MIN_POINT_EFFICIENCY || e > 1) && !zeroFlowZero)
+      ) {
         throw argumentError(
           'INVALID_ARGUMENT',
           `points[${i}].efficiency`,
           e,
           undefined,
-          '0 < efficiency <= 1 (a fraction; 0 only at zero flow)',
+          `${MIN_POINT_EFFICIENCY} <= efficiency <= 1 (a fraction; 0 only at zero flow)`,
         );
       }
       if (flow === 0 && e !== 0) {
@@ -478,7 +519,7 @@ function buildBase(input: PumpCurveInput): Base {
     allowable,
     speed: input.speed,
     diameter: input.impellerDiameter,
-    points: Object.freeze(points.map((p) => Object.freeze({ ...p }))),
+    points: Object.freeze(points.map(cataloguePointCopy)),
     fits: {
       head: head.report,
       efficiency: efficiency?.report,

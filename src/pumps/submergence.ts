@@ -3,7 +3,7 @@
  *
  * @module
  */
-import { guardRange, guardRecord } from '../guards';
+import { guardRange, guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Flow,
@@ -51,7 +51,8 @@ export interface Submergence {
  * intake submergence").
  *
  * @returns the minimum submergence (m), the inlet velocity (m/s) and the Froude number
- * @throws HeadflowError `INVALID_ARGUMENT` for a non-positive or non-finite flow, diameter or g.
+ * @throws HeadflowError `INVALID_ARGUMENT` for a non-positive or non-finite flow, diameter or g;
+ *   `OUT_OF_RANGE` where the velocity, Froude number or submergence would overflow.
  * @example
  * ```ts
  * const s = minimumSubmergence({ flow: q(0.5, 'm3/s'), inletDiameter: q(0.6, 'm') });
@@ -72,8 +73,10 @@ export function minimumSubmergence(input: SubmergenceInput): Submergence {
     o.g === undefined
       ? STANDARD_GRAVITY
       : guardRange('input.g', o.g, { min: 0, minOpen: true, unit: 'm/s2' });
-  const v = q / ((Math.PI * d * d) / 4);
-  const fr = v / Math.sqrt(g * d);
+  // A flow through a diameter of 1e-300 m would overflow: refused, not reported as Infinity.
+  const v = guardResult('inletVelocity', q / ((Math.PI * d * d) / 4), 'OUT_OF_RANGE');
+  const fr = guardResult('froudeNumber', v / Math.sqrt(g * d), 'OUT_OF_RANGE');
+  guardResult('submergence', d * (1 + 2.3 * fr), 'OUT_OF_RANGE');
   return {
     submergence: (d * (1 + 2.3 * fr)) as Length,
     inletVelocity: v as Velocity,

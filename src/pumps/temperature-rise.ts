@@ -4,7 +4,7 @@
  * @module
  */
 import { HeadflowError } from '../errors';
-import { guardRange } from '../guards';
+import { guardRange, guardResult } from '../guards';
 import type { Density, Flow, Power, SpecificHeat } from '../units/index';
 
 /**
@@ -34,7 +34,7 @@ import type { Density, Flow, Power, SpecificHeat } from '../units/index';
  *   absolute temperature: do not pass it to `to(..., 'degC')`)
  * @throws HeadflowError `INVALID_ARGUMENT` for negative or non-finite power, a hydraulic power
  *   above the shaft power (an efficiency above 1), a non-positive density, specific heat or
- *   flow.
+ *   flow; `OUT_OF_RANGE` where rho c_p Q underflows (the rise would be Infinity).
  * @example
  * ```ts
  * temperatureRise(q(10, 'kW'), q(2, 'kW'), q(998.2, 'kg/m3'), q(4184, 'J/(kg*K)'), q(5, 'm3/h'));
@@ -66,5 +66,6 @@ export function temperatureRise(
       },
     );
   }
-  return (shaft - hyd) / (rho * cp * q);
+  // A density, specific heat and flow whose product underflows would give Infinity: refused.
+  return guardResult('temperature rise', (shaft - hyd) / (rho * cp * q), 'OUT_OF_RANGE');
 }

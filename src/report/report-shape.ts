@@ -10,25 +10,296 @@
  */
 import type { DesignReport } from '../design/core';
 import { HeadflowError } from '../errors';
-import { guardArray, guardNumber, guardRecord, guardString, kindOf } from '../guards';
+import {
+  guardArray,
+  guardBoolean,
+  guardNumber,
+  guardOneOf,
+  guardRecord,
+  guardString,
+  kindOf,
+} from '../guards';
 
 const MAX_ITEMS = 100_000;
 
-function records(path: string, list: unknown): readonly Readonly<Record<string, unknown>>[] {
-  return guardArray(path, list, { max: MAX_ITEMS }).map((x, i) => guardRecord(`${path}[${i}]`, x));
-}
+// ---------------------------------------------------------------- the report's schema
 
-/** A list of checks: each with an id, severity, message and source that are strings. */
-function checks(path: string, list: unknown): void {
-  for (const [i, k] of records(path, list).entries()) {
-    for (const f of ['id', 'severity', 'message', 'source'] as const) {
-      guardString(`${path}[${i}].${f}`, k[f], 10_000);
+/** How one field of a report is checked. */
+type Shape =
+  | { readonly t: 'string'; readonly optional?: boolean }
+  | { readonly t: 'number'; readonly optional?: boolean; readonly finite?: boolean }
+  | { readonly t: 'boolean'; readonly optional?: boolean }
+  | { readonly t: 'oneOf'; readonly values: readonly string[]; readonly optional?: boolean }
+  | { readonly t: 'record'; readonly fields: Fields; readonly optional?: boolean }
+  | { readonly t: 'map'; readonly of: Shape; readonly optional?: boolean }
+  | { readonly t: 'list'; readonly of: Shape; readonly optional?: boolean };
+type Fields = Readonly<Record<string, Shape>>;
+
+const str: Shape = { t: 'string' };
+const optStr: Shape = { t: 'string', optional: true };
+// A missing or non-finite number is printed as a dash; another type is refused.
+const num: Shape = { t: 'number', optional: true };
+const count: Shape = { t: 'number', finite: true };
+// A number the renderer computes with (rounds, sums): present, finite or not.
+const reqNum: Shape = { t: 'number' };
+const bool: Shape = { t: 'boolean', optional: true };
+const oneOf = (values: readonly string[], optional = false): Shape => ({
+  t: 'oneOf',
+  values,
+  optional,
+});
+const rec = (fields: Fields, optional = false): Shape => ({ t: 'record', fields, optional });
+const list = (of: Shape, optional = false): Shape => ({ t: 'list', of, optional });
+
+const CHECK = rec({
+  id: str,
+  severity: oneOf(['error', 'warning', 'info']),
+  candidate: optStr,
+  case: optStr,
+  message: str,
+  source: str,
+  values: { t: 'map', of: num },
+  words: { t: 'map', of: str, optional: true },
+});
+
+const FLUID_FIELDS: Fields = {
+  name: str,
+  temperature: num,
+  density: num,
+  kinematicViscosity: num,
+  vaporPressure: num,
+};
+
+const RUN_DETAILS = rec({
+  name: str,
+  group: optStr,
+  flow: num,
+  insideDiameter: num,
+  velocity: num,
+  reynolds: num,
+  regime: oneOf(['none', 'laminar', 'transition', 'turbulent'], true),
+  frictionFactor: num,
+  law: oneOf(['darcy-weisbach', 'constant-factor', 'hazen-williams'], true),
+  lawValue: num,
+  pipeLoss: num,
+  fittingsLoss: num,
+  componentLoss: num,
+  totalLoss: num,
+  pressureDrop: num,
+  elevationChange: num,
+});
+
+const DUTY = rec({
+  case: str,
+  fluid: rec(FLUID_FIELDS),
+  aged: bool,
+  suctionElevation: num,
+  dischargeElevation: num,
+  npshTerms: rec(
+    {
+      surfacePressureHead: num,
+      vaporPressureHead: num,
+      staticHeight: num,
+      suctionLoss: num,
+      velocityHead: num,
+      total: num,
+    },
+    true,
+  ),
+  pumpDischargePressure: num,
+  head: num,
+  staticHead: num,
+  lossHead: num,
+  npshAvailable: num,
+  suctionPressure: num,
+  dischargePressure: num,
+  runs: list(RUN_DETAILS),
+});
+
+const CASE_RESULT = rec({
+  case: str,
+  failure: optStr,
+  speed: num,
+  flow: num,
+  head: num,
+  efficiency: num,
+  shaftPower: num,
+  percentOfBep: num,
+  region: oneOf(['preferred', 'allowable', 'outside'], true),
+  npshAvailable: num,
+  npshRequired: num,
+  npshRatio: num,
+  velocities: list(rec({ run: str, velocity: num })),
+  inputPower: num,
+  specificEnergy: num,
+  iterations: num,
+});
+
+const MOTOR = (optional: boolean): Shape =>
+  rec(
+    {
+      series: oneOf(['nema', 'iec']),
+      rating: num,
+      nameplate: num,
+      unit: oneOf(['hp', 'kW']),
+      loadFraction: num,
+      serviceFactor: num,
+    },
+    optional,
+  );
+
+const FIT = (optional: boolean): Shape =>
+  rec(
+    {
+      method: oneOf(['polynomial', 'monotone']),
+      degree: num,
+      selection: oneOf(['default', 'given'], true),
+      points: num,
+      rms: num,
+      maxResidual: num,
+      maxRelativeResidual: num,
+      withinTolerance: bool,
+      rSquared: num,
+    },
+    optional,
+  );
+
+const CANDIDATE = rec({
+  name: str,
+  count,
+  arrangement: oneOf(['single', 'parallel', 'series']),
+  control: oneOf(['fixed', 'speed']),
+  cases: list(CASE_RESULT),
+  maxShaftPower: num,
+  motor: MOTOR(true),
+  dutyOnlyMotor: MOTOR(true),
+  energy: rec(
+    {
+      kWh: num,
+      cost: rec({ amount: num, currency: str }, true),
+      control: oneOf(['throttle', 'speed'], true),
+      hours: num,
+    },
+    true,
+  ),
+  pump: rec({
+    points: list(
+      rec({ flow: num, head: num, efficiency: num, npshRequired: num, shaftPower: num }),
+    ),
+    ratedSpeed: num,
+    speed: num,
+    maxSpeed: num,
+    motorEfficiency: num,
+    driveEfficiency: num,
+    motorSeries: oneOf(['nema', 'iec'], true),
+    bep: rec({ flow: num, head: num, efficiency: num }, true),
+  }),
+  curveFit: rec({ head: FIT(false), efficiency: FIT(true) }),
+  checks: list(CHECK),
+  passed: bool,
+  rank: num,
+});
+
+const RUN_INPUT = rec({
+  name: str,
+  group: optStr,
+  size: optStr,
+  insideDiameter: num,
+  length: num,
+  material: optStr,
+  roughness: num,
+  agedRoughness: num,
+  fittings: list(rec({ id: str, description: str, count: num, k: num, source: str })),
+  valves: list(rec({ name: str, given: oneOf(['cv', 'kv', 'k']), coefficient: num, k: num })),
+  equipment: list(rec({ name: str, loss: num })),
+  elevationChange: num,
+});
+
+const SAMPLED = list(
+  rec({
+    name: str,
+    group: optStr,
+    speed: num,
+    maxSpeed: bool,
+    flows: list(num),
+    values: list(num),
+  }),
+);
+
+const CURVES = rec(
+  {
+    systems: SAMPLED,
+    pumps: SAMPLED,
+    efficiency: SAMPLED,
+    npshRequired: SAMPLED,
+    npshAvailable: SAMPLED,
+    preferredRegions: list(rec({ name: str, group: optStr, minFlow: num, maxFlow: num })),
+    points: list(rec({ name: str, candidate: optStr, case: optStr, flow: num, head: num })),
+    dutyPoints: list(rec({ case: str, flow: num, head: num }), true),
+  },
+  true,
+);
+
+const REPORT: Fields = {
+  name: str,
+  units: oneOf(['si', 'us'], true),
+  dutyFlow: num,
+  fluid: rec(FLUID_FIELDS),
+  verdict: rec({ candidates: num, passing: num, recommended: optStr, passed: bool }),
+  inputs: rec({
+    runs: list(RUN_INPUT),
+    pumpLocation: rec({ elevation: num, suctionRuns: num }, true),
+    profile: list(rec({ flow: num, hours: num })),
+    energyPrice: rec({ perKWh: num, currency: str }, true),
+  }),
+  atmosphere: num,
+  duty: list(DUTY),
+  candidates: list(CANDIDATE),
+  checks: list(CHECK),
+  cautions: list({ t: 'string' }),
+  passed: bool,
+  curves: CURVES,
+};
+
+/** Checks `value` at `path` against `shape`, throwing `INVALID_ARGUMENT` naming the field. */
+function checkShape(path: string, value: unknown, shape: Shape): void {
+  // Absent is `undefined` (a report's own form); `null` is refused where the renderer reads on.
+  if (value === undefined && shape.optional) return;
+  switch (shape.t) {
+    case 'string':
+      guardString(path, value, 100_000);
+      return;
+    case 'number':
+      if (shape.finite) guardNumber(path, value);
+      else if (typeof value !== 'number') {
+        throw new HeadflowError('INVALID_ARGUMENT', `${path} is ${kindOf(value)}, not a number.`, {
+          parameter: path,
+          allowed: 'a number',
+        });
+      }
+      return;
+    case 'boolean':
+      guardBoolean(path, value);
+      return;
+    case 'oneOf':
+      guardOneOf(path, value, shape.values);
+      return;
+    case 'record': {
+      const r = guardRecord(path, value);
+      for (const [k, s] of Object.entries(shape.fields)) {
+        checkShape(`${path}.${k}`, Object.hasOwn(r, k) ? r[k] : undefined, s);
+      }
+      return;
     }
-    guardRecord(`${path}[${i}].values`, k['values']);
-    if (k['words'] !== undefined) {
-      const words = guardRecord(`${path}[${i}].words`, k['words']);
-      for (const [key, w] of Object.entries(words))
-        guardString(`${path}[${i}].words.${key}`, w, 10_000);
+    case 'map': {
+      const r = guardRecord(path, value);
+      for (const [k, v] of Object.entries(r)) checkShape(`${path}.${k}`, v, shape.of);
+      return;
+    }
+    case 'list': {
+      const a = guardArray(path, value, { max: MAX_ITEMS });
+      for (let i = 0; i < a.length; i++) checkShape(`${path}[${i}]`, a[i], shape.of);
+      return;
     }
   }
 }
@@ -79,65 +350,83 @@ function checkPlainData(report: object): void {
   }
 }
 
-/** The sampled curves, when the report has them (`evaluateDesign(input, { curves: true })`). */
-function checkCurves(curves: Readonly<Record<string, unknown>>): void {
-  for (const k of ['systems', 'pumps', 'efficiency', 'npshRequired', 'npshAvailable'] as const) {
-    for (const [i, c] of records(`report.curves.${k}`, curves[k] ?? []).entries()) {
-      guardString(`report.curves.${k}[${i}].name`, c['name'], 10_000);
-      if (c['group'] !== undefined)
-        guardString(`report.curves.${k}[${i}].group`, c['group'], 10_000);
-      guardArray(`report.curves.${k}[${i}].flows`, c['flows'], { max: MAX_ITEMS });
-      guardArray(`report.curves.${k}[${i}].values`, c['values'], { max: MAX_ITEMS });
-    }
-  }
-  for (const k of ['preferredRegions', 'points'] as const) {
-    for (const [i, c] of records(`report.curves.${k}`, curves[k] ?? []).entries()) {
-      guardString(`report.curves.${k}[${i}].name`, c['name'], 10_000);
-      if (c['group'] !== undefined)
-        guardString(`report.curves.${k}[${i}].group`, c['group'], 10_000);
-    }
-  }
-  for (const [i, d] of records('report.curves.dutyPoints', curves['dutyPoints'] ?? []).entries()) {
-    guardString(`report.curves.dutyPoints[${i}].case`, d['case'], 10_000);
-  }
-}
-
 /** Throws `INVALID_ARGUMENT` naming the first part of `report` that has the wrong shape. */
 export function checkReportShape(report: DesignReport): void {
   const r = guardRecord('report', report);
-  guardString('report.name', r['name'], 10_000);
-  if (r['fluid'] !== undefined) {
-    guardString('report.fluid.name', guardRecord('report.fluid', r['fluid'])['name'], 10_000);
-  }
-  for (const f of ['verdict', 'inputs'] as const) {
-    if (r[f] !== undefined) guardRecord(`report.${f}`, r[f]);
-  }
-  for (const [i, d] of records('report.duty', r['duty']).entries()) {
-    guardString(`report.duty[${i}].case`, d['case'], 10_000);
-    for (const [j, run] of records(`report.duty[${i}].runs`, d['runs']).entries()) {
-      guardString(`report.duty[${i}].runs[${j}].name`, run['name'], 10_000);
-    }
-  }
-  for (const [i, c] of records('report.candidates', r['candidates']).entries()) {
-    const at = `report.candidates[${i}]`;
-    guardString(`${at}.name`, c['name'], 10_000);
-    guardNumber(`${at}.count`, c['count']);
-    for (const [j, k] of records(`${at}.cases`, c['cases']).entries()) {
-      records(`${at}.cases[${j}].velocities`, k['velocities']);
-    }
-    checks(`${at}.checks`, c['checks']);
-    for (const m of ['motor', 'dutyOnlyMotor', 'energy'] as const) {
-      if (c[m] !== undefined) guardRecord(`${at}.${m}`, c[m]);
-    }
-    const energy = c['energy'] as Readonly<Record<string, unknown>> | undefined;
-    if (energy?.['cost'] !== undefined) guardRecord(`${at}.energy.cost`, energy['cost']);
-  }
-  checks('report.checks', r['checks']);
-  for (const [i, text] of guardArray('report.cautions', r['cautions'], {
-    max: MAX_ITEMS,
-  }).entries()) {
-    guardString(`report.cautions[${i}]`, text, 100_000);
-  }
-  if (r['curves'] !== undefined) checkCurves(guardRecord('report.curves', r['curves']));
   checkPlainData(r);
+  checkShape('report', r, rec(REPORT));
+}
+
+// ---------------------------------------------------------------- a pump selection
+
+const COST = rec({ amount: num, currency: str }, true);
+
+const SELECTION_CASE = rec({
+  case: str,
+  failure: optStr,
+  speed: num,
+  flow: num,
+  head: num,
+  efficiency: num,
+  percentOfBep: num,
+  npshMargin: num,
+  npshRatio: num,
+  throttleHead: num,
+  throttlePower: num,
+  inputPower: num,
+  energy: rec({ kWh: reqNum, cost: COST }, true),
+});
+
+const SELECTION_ENTRY = rec({
+  rank: reqNum,
+  name: str,
+  method: oneOf(['throttle', 'trim', 'speed']),
+  label: str,
+  trimDiameter: num,
+  trimRatio: num,
+  trimIterations: num,
+  trimBasis: oneOf(['trim law', 'interpolated', 'catalogue curve'], true),
+  speed: num,
+  passed: bool,
+  checks: list(CHECK),
+  cases: list(SELECTION_CASE),
+  motor: MOTOR(true),
+  energy: rec({ kWh: reqNum, cost: COST }, true),
+  lifeCycleCost: rec(
+    {
+      total: reqNum,
+      initial: num,
+      installation: num,
+      energy: num,
+      operation: num,
+      maintenance: num,
+      downtime: num,
+      environmental: num,
+      decommissioning: num,
+    },
+    true,
+  ),
+});
+
+const SELECTION: Fields = {
+  name: str,
+  catalogue: optStr,
+  dutyFlow: num,
+  duty: list(DUTY),
+  cautions: list(str),
+  costs: { t: 'map', of: num, optional: true },
+  ranked: list(SELECTION_ENTRY),
+  rankedBy: oneOf(['life-cycle cost', 'energy']),
+  currency: optStr,
+  systemChecks: list(CHECK, true),
+  notes: list(str, true),
+};
+
+/**
+ * Throws `INVALID_ARGUMENT` naming the first part of a pump selection (from `selectPumps`)
+ * that has the wrong shape for its renderer. Its ways' curves, candidates and reports are not
+ * printed and not checked.
+ */
+export function checkSelectionShape(selection: unknown): void {
+  checkShape('selection', selection, rec(SELECTION));
 }

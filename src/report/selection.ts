@@ -5,19 +5,12 @@
  *
  * @module
  */
+
 import { displayUnits, type UnitSystem } from '../design/core';
-import {
-  guardArray,
-  guardInteger,
-  guardNumber,
-  guardOneOf,
-  guardOptions,
-  guardRange,
-  guardRecord,
-  guardString,
-} from '../guards';
+import { guardInteger, guardOneOf, guardOptions, guardRange, guardRecord } from '../guards';
 import type { Selection, SelectionEntry } from '../select/index';
 import { type Flow, formatQuantity, type Length, type Power, to } from '../units/index';
+import { checkSelectionShape } from './report-shape';
 
 /** Options of {@link renderSelection}. */
 export interface SelectionRenderOptions {
@@ -256,27 +249,8 @@ function json(selection: Selection, entries: readonly SelectionEntry[], units: U
 /** The shape a rendering reads (a selection from `selectPumps` always has it). */
 function checkSelection(selection: Selection): void {
   const s = guardRecord('selection', selection);
-  guardString('selection.name', s['name']);
   guardRange('selection.dutyFlow', s['dutyFlow'], { min: 0, minOpen: true, unit: 'm3/s' });
-  guardOneOf('selection.rankedBy', s['rankedBy'], ['life-cycle cost', 'energy'] as const);
-  guardArray('selection.cautions', s['cautions']).forEach((c, i) => {
-    guardString(`selection.cautions[${i}]`, c, 10_000);
-  });
-  guardArray('selection.duty', s['duty']).forEach((d, i) => {
-    const r = guardRecord(`selection.duty[${i}]`, d);
-    guardString(`selection.duty[${i}].case`, r['case']);
-    guardNumber(`selection.duty[${i}].head`, r['head']);
-  });
-  guardArray('selection.ranked', s['ranked']).forEach((e, i) => {
-    const r = guardRecord(`selection.ranked[${i}]`, e);
-    guardString(`selection.ranked[${i}].label`, r['label'], 1000);
-    guardArray(`selection.ranked[${i}].cases`, r['cases']).forEach((c, j) => {
-      guardRecord(`selection.ranked[${i}].cases[${j}]`, c);
-    });
-    guardArray(`selection.ranked[${i}].checks`, r['checks']).forEach((c, j) => {
-      guardRecord(`selection.ranked[${i}].checks[${j}]`, c);
-    });
-  });
+  checkSelectionShape(s);
 }
 
 /**

@@ -37,18 +37,34 @@ export class CatalogueFileError extends HeadflowError {
   /** Every problem found, in file order. */
   readonly issues: readonly CatalogueIssue[];
 
+  /**
+   * Constructs with any arguments without throwing: issues that are not `{ path, message,
+   * code }` records are left out, and a source that is not a string is not named.
+   */
   constructor(issues: readonly [CatalogueIssue, ...CatalogueIssue[]], source?: string) {
-    const first = issues[0];
-    const where = source === undefined ? 'the pump catalogue' : `pump catalogue ${source}`;
-    const count = issues.length === 1 ? 'a problem' : `${issues.length} problems`;
-    const shown = issues.slice(0, MAX_LISTED).map((i) => `\n  - ${i.path}: ${i.message}`);
-    const more = issues.length > MAX_LISTED ? `\n  ... and ${issues.length - MAX_LISTED} more` : '';
-    super(first.code, `${where} has ${count}:${shown.join('')}${more}`, {
-      parameter: first.path,
+    const list = Array.isArray(issues) ? issues.filter(isCatalogueIssue) : [];
+    const first = list[0];
+    const where =
+      typeof source === 'string' ? `pump catalogue ${source.slice(0, 200)}` : 'the pump catalogue';
+    const count = list.length === 1 ? 'a problem' : `${list.length} problems`;
+    const shown = list.slice(0, MAX_LISTED).map((i) => `\n  - ${i.path}: ${i.message}`);
+    const more = list.length > MAX_LISTED ? `\n  ... and ${list.length - MAX_LISTED} more` : '';
+    super(first?.code ?? 'INVALID_ARGUMENT', `${where} has ${count}:${shown.join('')}${more}`, {
+      ...(first === undefined ? {} : { parameter: first.path }),
       allowed: 'see the catalogue format (docs/select.md)',
     });
-    this.issues = issues;
+    this.issues = list;
   }
+}
+
+function isCatalogueIssue(x: unknown): x is CatalogueIssue {
+  if (typeof x !== 'object' || x === null) return false;
+  const i = x as Record<string, unknown>;
+  return (
+    typeof i['path'] === 'string' &&
+    typeof i['message'] === 'string' &&
+    typeof i['code'] === 'string'
+  );
 }
 
 /** Codes of the issues raised here (others are INVALID_ARGUMENT). */

@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { guardInteger, guardNumber, guardOptions, guardRange } from '../guards';
+import { guardInteger, guardNumber, guardOptions, guardRange, guardResult } from '../guards';
 import type { LifeCycleCost } from './types';
 
 /** Input of {@link lifeCycleCost}; every field is optional and defaults to zero (years: 20). */
@@ -89,7 +89,7 @@ function annuityFactor(n: number, i: number, e: number): number {
  * commonly appraised over 15 to 20 years; Hydraulic Institute, common practice).
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for a negative or non-finite cost, or years or rates
- *   outside their ranges.
+ *   outside their ranges; `OUT_OF_RANGE` for costs whose sum would overflow.
  * @example
  * ```ts
  * lifeCycleCost({ years: 10, discountRate: 0.08, initial: 12000, energyPerYear: 5000 }).total;
@@ -135,6 +135,8 @@ export function lifeCycleCost(input?: LifeCycleCostInput | null): LifeCycleCost 
     downtime +
     environmental +
     decommissioning;
+  // Costs near the largest number can add up past it: refused rather than an Infinity total.
+  guardResult('total', total, 'OUT_OF_RANGE');
   return {
     total,
     initial,

@@ -5,6 +5,7 @@
  *
  * @module
  */
+
 import {
   type CandidateInput,
   type CandidateReport,
@@ -15,6 +16,7 @@ import {
   type DesignReport,
   evaluateDesign,
 } from '../design/index';
+import { checkDesignShape } from '../design/input-shape';
 import { HeadflowError } from '../errors';
 import {
   guardArray,
@@ -426,6 +428,9 @@ export function selectPumps(
  */
 export function checkDesign(design: DesignInput): void {
   const d = guardRecord('design', design);
+  // The shape evaluateDesign checks (runs that are objects, names that are strings ...), before
+  // the selection or the pipe sizing walks the design itself.
+  checkDesignShape(design);
   guardRecord('design.system', d['system']);
   guardRange('design.dutyFlow', d['dutyFlow'], { min: 0, minOpen: true, unit: 'm3/s' });
   if (d['cases'] !== undefined) guardArray('design.cases', d['cases'], { max: 1000 });

@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { guardRange, guardRecord } from '../guards';
+import { guardRange, guardRecord, guardResult } from '../guards';
 import {
   type Acceleration,
   type Length,
@@ -71,7 +71,8 @@ export interface ClosureSurge {
  *
  * @returns the head rise (m), the round-trip time (s) and the relation used
  * @throws HeadflowError `INVALID_ARGUMENT` for a non-positive or non-finite wave speed, length
- *   or g, or a negative or non-finite velocity change or closure time.
+ *   or g, or a negative or non-finite velocity change or closure time; `OUT_OF_RANGE` where
+ *   the head or round-trip time would overflow.
  * @example
  * ```ts
  * const s = closureSurgeHead({ waveSpeed: q(1000, 'm/s'), length: q(2000, 'm'),
@@ -91,9 +92,15 @@ export function closureSurgeHead(input: ClosureSurgeInput): ClosureSurge {
     o.g === undefined
       ? STANDARD_GRAVITY
       : guardRange('input.g', o.g, { min: 0, minOpen: true, unit: 'm/s2' });
-  const roundTrip = (2 * length) / a;
+  // Finite inputs whose ratio overflows (a length of 1e300 m at a wave speed of 1e-300 m/s)
+  // are refused rather than reported as Infinity.
+  const roundTrip = guardResult('roundTripTime', (2 * length) / a, 'OUT_OF_RANGE');
   const sudden = tc <= roundTrip;
-  const head = sudden ? (a * dv) / g : (2 * length * dv) / (g * tc);
+  const head = guardResult(
+    'head',
+    sudden ? (a * dv) / g : (2 * length * dv) / (g * tc),
+    'OUT_OF_RANGE',
+  );
   return {
     head: head as Length,
     roundTripTime: roundTrip as Time,

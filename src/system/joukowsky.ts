@@ -3,7 +3,7 @@
  *
  * @module
  */
-import { guardNumber, guardRange } from '../guards';
+import { guardNumber, guardRange, guardResult } from '../guards';
 import { type Acceleration, type Length, STANDARD_GRAVITY, type Velocity } from '../units/index';
 
 /**
@@ -30,7 +30,7 @@ import { type Acceleration, type Length, STANDARD_GRAVITY, type Velocity } from 
  * @param g - gravity (m/s^2), > 0, default 9.80665
  * @returns head change dH (m of the liquid), with the sign of dV
  * @throws HeadflowError `INVALID_ARGUMENT` for a non-positive or non-finite wave speed or g,
- *   or a non-finite velocity change.
+ *   or a non-finite velocity change; `OUT_OF_RANGE` where the head would overflow.
  * @example
  * ```ts
  * to(joukowskyHead(q(1200, 'm/s'), q(2, 'm/s')), 'm'); // 244.73... (1200 x 2 / 9.80665)
@@ -45,5 +45,5 @@ export function joukowskyHead(
   const a = guardRange('waveSpeed', waveSpeed, { min: 0, minOpen: true, unit: 'm/s' });
   const dv = guardNumber('velocityChange', velocityChange, 'm/s');
   const gg = guardRange('g', g, { min: 0, minOpen: true, unit: 'm/s2' });
-  return ((a * dv) / gg) as Length;
+  return guardResult('head', (a * dv) / gg, 'OUT_OF_RANGE') as Length;
 }

@@ -5,7 +5,7 @@
  * @module
  */
 import { HeadflowError } from '../errors';
-import { guardOneOf, guardRange, guardRecord } from '../guards';
+import { guardOneOf, guardRange, guardRecord, guardResult } from '../guards';
 import type { Length } from '../units/index';
 
 /** How a pipe is held against axial movement, for {@link restraintFactor}. */
@@ -62,7 +62,8 @@ export interface RestraintFactorInput {
  *
  * @returns c1 (dimensionless, > 0)
  * @throws HeadflowError `INVALID_ARGUMENT` for an unknown anchoring, a Poisson's ratio outside
- *   [0, 0.5], an unknown wall form, or a thick wall without a positive diameter and thickness.
+ *   [0, 0.5], an unknown wall form, or a thick wall without a positive diameter and thickness;
+ *   `OUT_OF_RANGE` for a thick wall whose e/D would overflow.
  * @example
  * ```ts
  * restraintFactor({ anchoring: 'anchored-throughout', poissonRatio: 0.3 }); // 0.91
@@ -99,7 +100,7 @@ export function restraintFactor(input: RestraintFactorInput): number {
     minOpen: true,
     unit: 'm',
   });
-  return thickRestraint(axial, mu, d, e);
+  return guardResult('restraint factor', thickRestraint(axial, mu, d, e), 'OUT_OF_RANGE');
 }
 
 /** Thick-wall c1 from the thin-wall axial term: `(2e/D)(1 + mu) + D axial/(D + e)`. @internal */

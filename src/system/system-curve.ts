@@ -185,8 +185,25 @@ function checkEndpoint(e: Endpoint, name: string): void {
     checkPositive(`${name}.velocityDiameter`, e.velocityDiameter, 'm');
 }
 
+/**
+ * Largest liquid density a system takes (kg/m3): the physical range of a density in scenario
+ * files (`PHYSICAL_RANGE`); mercury, the densest common liquid, is 13 534 kg/m3 at 20 degC
+ * (common practice).
+ */
+const MAX_LIQUID_DENSITY = 1e5;
+
 function checkFluid(fluid: FluidState, suction: Endpoint): void {
   checkPositive('fluid.density', fluid.density, 'kg/m3');
+  if (fluid.density > MAX_LIQUID_DENSITY) {
+    // Powers and pressures of the design (rho g Q H) would overflow for no liquid there is.
+    throw argumentError(
+      'OUT_OF_RANGE',
+      'fluid.density',
+      fluid.density,
+      'kg/m3',
+      `<= ${MAX_LIQUID_DENSITY} (the physical range of a density)`,
+    );
+  }
   checkPositive('fluid.kinematicViscosity', fluid.kinematicViscosity, 'm2/s');
   if (fluid.vaporPressure !== undefined) {
     guardRange('fluid.vaporPressure', fluid.vaporPressure, { min: 0, unit: 'Pa' });
@@ -230,7 +247,8 @@ function checkFluid(fluid: FluidState, suction: Endpoint): void {
  * (2011), eq. 3.73 and section 6.9 (multiple-pipe systems).
  *
  * @throws HeadflowError `INVALID_ARGUMENT` for impossible runs, endpoints or fluid;
- *   `OUT_OF_RANGE` when the fluid boils at the suction pressure; `UNKNOWN_NAME` for an unknown
+ *   `OUT_OF_RANGE` when the fluid boils at the suction pressure or is denser than 1e5 kg/m3
+ *   (no liquid is; rho g Q H would overflow); `UNKNOWN_NAME` for an unknown
  *   fitting or material.
  * @example
  * ```ts

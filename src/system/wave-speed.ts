@@ -4,7 +4,7 @@
  * @module
  */
 import { HeadflowError } from '../errors';
-import { guardOneOf, guardRange, guardRecord } from '../guards';
+import { guardOneOf, guardRange, guardRecord, guardResult } from '../guards';
 import type { Density, Length, Pressure, Velocity } from '../units/index';
 import { PIPE_ANCHORINGS, type PipeAnchoring, restraintFactor } from './restraint-factor';
 
@@ -64,7 +64,8 @@ export interface WaveSpeedInput {
  * @throws HeadflowError `INVALID_ARGUMENT` for a non-positive or non-finite modulus, density,
  *   diameter, thickness or restraint factor; for part of the pipe's data without the rest; for
  *   restraint options without the pipe's data; for a Poisson's ratio outside [0, 0.5] or a
- *   missing one where the anchoring needs it; for an unknown anchoring or wall form.
+ *   missing one where the anchoring needs it; for an unknown anchoring or wall form;
+ *   `OUT_OF_RANGE` where K / rho would overflow.
  * @example
  * ```ts
  * // water at 20 degC, rigid pipe: the speed of sound
@@ -79,7 +80,8 @@ export function waveSpeed(input: WaveSpeedInput): Velocity {
   const o = guardRecord('input', input) as Partial<Record<keyof WaveSpeedInput, unknown>>;
   const k = guardRange('input.bulkModulus', o.bulkModulus, { min: 0, minOpen: true, unit: 'Pa' });
   const rho = guardRange('input.density', o.density, { min: 0, minOpen: true, unit: 'kg/m3' });
-  const rigid = k / rho;
+  // A modulus over a density of 1e-300 would overflow: refused, not reported as Infinity.
+  const rigid = guardResult('bulkModulus / density', k / rho, 'OUT_OF_RANGE');
   const pipeKeys = ['insideDiameter', 'wallThickness', 'elasticModulus'] as const;
   const given = pipeKeys.filter((key) => o[key] !== undefined);
   if (given.length === 0) {
@@ -144,5 +146,9 @@ export function waveSpeed(input: WaveSpeedInput): Velocity {
       wallThickness: e as Length,
     });
   }
-  return Math.sqrt(rigid / (1 + (c1 * k * d) / (young * e))) as Velocity;
+  return guardResult(
+    'wave speed',
+    Math.sqrt(rigid / (1 + (c1 * k * d) / (young * e))),
+    'OUT_OF_RANGE',
+  ) as Velocity;
 }

@@ -9,10 +9,19 @@ import * as root from '../../src/index';
 import { basicEntries } from './entries/basics';
 import { documentEntries } from './entries/documents';
 import { machineEntries } from './entries/machines';
+import { networkEntries } from './entries/network';
+import { selectionEntries } from './entries/selection';
 import { sizeChartEntries } from './entries/size-chart';
 import { FUZZ_RUNS } from './harness';
 
-const ENTRIES = [...basicEntries, ...machineEntries, ...documentEntries, ...sizeChartEntries];
+const ENTRIES = [
+  ...basicEntries,
+  ...machineEntries,
+  ...documentEntries,
+  ...networkEntries,
+  ...selectionEntries,
+  ...sizeChartEntries,
+];
 
 function functionsOf(module: Record<string, unknown>): Map<string, unknown> {
   return new Map(Object.entries(module).filter(([, v]) => typeof v === 'function'));

@@ -28,6 +28,10 @@
  * },
  * ```
  *
+ * A whole-job function whose single call takes milliseconds states its own `runs` (calls of
+ * each kind at the default 1000, scaled with HEADFLOW_FUZZ_RUNS), so that the suite keeps
+ * within its minute in `npm test`.
+ *
  * Hostile calls need nothing more: they are made from the valid ones. Where the function
  * returns an object with methods (a curve, a fluid), let `call` use them too, so that the
  * methods meet hostile arguments. tests/fuzz/exports.test.ts fails while an export has no row.
@@ -55,6 +59,19 @@ export interface FuzzEntry {
   readonly documentedInfinity?: readonly string[];
   /** A type brand that returns its first argument unchanged (`si`): only that is checked. */
   readonly identity?: boolean;
+  /**
+   * Calls of each kind for a whole-job function (selectPumps, economicPipeSize, solveNetwork)
+   * whose single call takes milliseconds, at the default HEADFLOW_FUZZ_RUNS of 1000; scaled
+   * with HEADFLOW_FUZZ_RUNS for a long local run. Every other row runs FUZZ_RUNS.
+   */
+  readonly runs?: number;
+}
+
+/** Calls of each kind for `entry`: FUZZ_RUNS, or its own `runs` scaled by FUZZ_RUNS / 1000. */
+export function runsOf(entry: FuzzEntry): number {
+  return entry.runs === undefined
+    ? FUZZ_RUNS
+    : Math.max(1, Math.round((entry.runs * FUZZ_RUNS) / 1000));
 }
 
 /** A test timeout that grows with the number of runs (given for the default 1000). */
@@ -411,7 +428,7 @@ function callChecked(entry: FuzzEntry, args: readonly unknown[], valid: boolean)
 
 /** Runs one entry: valid calls, then hostile calls. */
 export function runEntry(entry: FuzzEntry): void {
-  const numRuns = FUZZ_RUNS;
+  const numRuns = runsOf(entry);
   fc.assert(
     fc.property(entry.valid, (args) => callChecked(entry, args, true)),
     { numRuns },

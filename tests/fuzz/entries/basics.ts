@@ -489,4 +489,42 @@ export const basicEntries: readonly FuzzEntry[] = [
       ];
     },
   },
+  // IF97 region 1 properties: cold water at any pressure up to 100 MPa, hot water above its
+  // saturation pressure (16.5 MPa at 623.15 K).
+  ...(
+    [
+      ['waterSpeedOfSound', api.waterSpeedOfSound],
+      ['waterSpecificHeat', api.waterSpecificHeat],
+    ] as const
+  ).map(
+    ([name, fn]): FuzzEntry => ({
+      name,
+      valid: fc.oneof(
+        fc.tuple(uniform(273.15, 370), uniform(1.1e5, 1e8)),
+        fc.tuple(uniform(370, 623.15), uniform(1.7e7, 1e8)),
+      ),
+      call: fn,
+    }),
+  ),
+  { name: 'atmosphereAt', valid: fc.tuple(uniform(-5000, 11_000)), call: api.atmosphereAt },
+  {
+    name: 'aliasesOf',
+    valid: fc.tuple(fc.constantFrom(...api.DIMENSIONS)),
+    call: api.aliasesOf,
+  },
+  {
+    name: 'parsePressure',
+    valid: fc.tuple(
+      fc
+        .tuple(
+          uniform(0, 1e4),
+          fc.constantFrom('psig', 'psia', 'psi', 'barg', 'bara', 'bar', 'kPa(g)', 'kPa', 'MPa'),
+        )
+        .map(([x, unit]) => `${x} ${unit}`),
+      optionsOf(
+        fc.record({ unmarked: fc.constantFrom('absolute', 'gauge') }, { requiredKeys: [] }),
+      ),
+    ),
+    call: api.parsePressure,
+  },
 ];

@@ -29,15 +29,29 @@ const scenario = fc.tuple(example, uniform(0.6, 1.3)).map(([i, factor]) => {
   return file;
 });
 
+// Reports with their sampled curves (the chart needs them) and without (the default).
+const CURVED: readonly DesignReport[] = EXAMPLES.map((file) =>
+  api.evaluateDesign(api.readScenario(file), { curves: true }),
+);
 const REPORTS: readonly DesignReport[] = [
   ...EXAMPLES.map((file) => api.evaluateDesign(api.readScenario(file))),
+  ...CURVED,
   fixtureReport,
 ];
 const report = fc.oneof(
   { weight: 1, arbitrary: fc.constantFrom(...REPORTS) },
   { weight: 2, arbitrary: fc.constant(REPORTS[2] as DesignReport) },
 );
+const curvedReport = fc.oneof(
+  { weight: 1, arbitrary: fc.constantFrom(...CURVED) },
+  { weight: 2, arbitrary: fc.constant(CURVED[2] as DesignReport) },
+);
 const unitSystem = fc.constantFrom('si', 'us');
+/** Every check of the reports: the messages checkMessage rebuilds. */
+const CHECKS: readonly api.Check[] = REPORTS.flatMap((r) => [
+  ...r.checks,
+  ...r.candidates.flatMap((c) => c.checks),
+]);
 const noNanText = (out: unknown): void => {
   const text = typeof out === 'string' ? out : JSON.stringify(out);
   if (/\bNaN\b|Infinity/.test(text)) throw new Error('a rendered report shows NaN or Infinity');
@@ -96,13 +110,16 @@ export const documentEntries: readonly FuzzEntry[] = [
   },
   {
     name: 'chartSpecFromReport',
-    valid: fc.tuple(report, optionsOf(fc.record({ units: unitSystem }, { requiredKeys: [] }))),
+    valid: fc.tuple(
+      curvedReport,
+      optionsOf(fc.record({ units: unitSystem }, { requiredKeys: [] })),
+    ),
     call: api.chartSpecFromReport,
   },
   {
     name: 'renderChart',
     valid: fc.tuple(
-      report.map((r) => api.chartSpecFromReport(r)),
+      curvedReport.map((r) => api.chartSpecFromReport(r)),
       optionsOf(
         fc.record(
           {
@@ -114,6 +131,42 @@ export const documentEntries: readonly FuzzEntry[] = [
       ),
     ),
     call: api.renderChart,
+    check: noNanText,
+  },
+  {
+    name: 'renderHtml',
+    // The chart needs the sampled curves: `chart: true` only with a report that has them.
+    valid: fc.oneof(
+      fc.tuple(
+        report,
+        optionsOf(
+          fc.record(
+            { units: unitSystem, summary: fc.boolean(), chart: fc.constant(false) },
+            { requiredKeys: [] },
+          ),
+        ),
+      ),
+      fc.tuple(
+        curvedReport,
+        optionsOf(
+          fc.record(
+            { units: unitSystem, summary: fc.boolean(), chart: fc.boolean() },
+            { requiredKeys: [] },
+          ),
+        ),
+      ),
+    ),
+    call: api.renderHtml,
+    check: noNanText,
+  },
+  {
+    name: 'checkMessage',
+    valid: fc.tuple(
+      fc.constantFrom(...CHECKS),
+      unitSystem,
+      fc.constantFrom('ascii', 'unicode', undefined),
+    ),
+    call: api.checkMessage,
     check: noNanText,
   },
   {

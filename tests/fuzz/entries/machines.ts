@@ -447,4 +447,160 @@ export const machineEntries: readonly FuzzEntry[] = [
     ),
     call: api.suctionSpecificSpeed,
   },
+  {
+    name: 'minimumSubmergence',
+    valid: fc.tuple(
+      fc.record(
+        { flow: logUniform(1e-4, 20), inletDiameter: logUniform(0.05, 3), g: uniform(9.7, 9.9) },
+        { requiredKeys: ['flow', 'inletDiameter'] },
+      ),
+    ),
+    call: api.minimumSubmergence,
+  },
+  {
+    name: 'temperatureRise',
+    valid: fc
+      .tuple(
+        logUniform(10, 5e6),
+        uniform(0, 1),
+        uniform(500, 2000),
+        uniform(1500, 4500),
+        logUniform(1e-5, 5),
+      )
+      .map(([shaft, share, rho, cp, q]) => [shaft, shaft * share, rho, cp, q]),
+    call: api.temperatureRise,
+  },
+  {
+    name: 'viscosityCorrectionFactors',
+    valid: fc.tuple(
+      fc.record({
+        flowAtBep: logUniform(1e-4, 3),
+        headAtBep: logUniform(2, 300),
+        speed: uniform(50, 400),
+        kinematicViscosity: logUniform(1e-7, api.VISCOSITY_NU_MAX),
+      }),
+      optionsOf(fc.record({ stages: fc.integer({ min: 1, max: 10 }) }, { requiredKeys: [] })),
+      uniform(0, 1.5),
+    ),
+    call: (input: api.ViscosityFactorsInput, options: never, share: number) => {
+      const f = api.viscosityCorrectionFactors(input, options);
+      const at = typeof share === 'number' && typeof input?.flowAtBep === 'number';
+      return [f, f.headAt((at ? input.flowAtBep * share : share) as Flow)];
+    },
+    // B of 40 and above, or above 3000 cSt: outside the method.
+    validMayThrow: ['OUT_OF_RANGE'],
+  },
+  {
+    name: 'correctForViscosity',
+    valid: fc.tuple(
+      pump,
+      fc.record({
+        temperature: uniform(275, 360),
+        pressure: fc.constant(101325),
+        density: uniform(700, 1300),
+        dynamicViscosity: logUniform(3e-4, 1),
+        kinematicViscosity: logUniform(1e-7, api.VISCOSITY_NU_MAX),
+      }),
+      optionsOf(
+        fc.record(
+          { stages: fc.integer({ min: 1, max: 6 }), points: fc.integer({ min: 5, max: 60 }) },
+          { requiredKeys: [] },
+        ),
+      ),
+      uniform(0, 1),
+    ),
+    call: (p: PumpCurve, state: never, options: never, at: number) => {
+      const c = api.correctForViscosity(p, state, options);
+      const q = flowAt(c.curve.flowRange, at);
+      return [c.applied, c.factors, c.curve.head(q), c.curve.efficiency(q)];
+    },
+    // B of 40 and above, or above 3000 cSt: outside the method.
+    validMayThrow: ['OUT_OF_RANGE'],
+  },
+
+  // surge
+  {
+    name: 'joukowskyHead',
+    valid: fc.tuple(uniform(100, 1500), uniform(0, 10), uniform(9.7, 9.9)),
+    call: api.joukowskyHead,
+  },
+  {
+    name: 'closureSurgeHead',
+    valid: fc.tuple(
+      fc.record(
+        {
+          waveSpeed: uniform(100, 1500),
+          length: logUniform(1, 1e5),
+          velocityChange: uniform(0, 10),
+          closureTime: uniform(0, 600),
+          g: uniform(9.7, 9.9),
+        },
+        { requiredKeys: ['waveSpeed', 'length', 'velocityChange', 'closureTime'] },
+      ),
+    ),
+    call: api.closureSurgeHead,
+  },
+  {
+    name: 'restraintFactor',
+    valid: fc.tuple(
+      fc.oneof(
+        fc.record(
+          {
+            anchoring: fc.constantFrom(...api.PIPE_ANCHORINGS),
+            poissonRatio: uniform(0, 0.5),
+            wall: fc.constant('thin' as const),
+          },
+          { requiredKeys: ['anchoring', 'poissonRatio'] },
+        ),
+        fc.record({
+          anchoring: fc.constantFrom(...api.PIPE_ANCHORINGS),
+          poissonRatio: uniform(0, 0.5),
+          wall: fc.constant('thick' as const),
+          insideDiameter: logUniform(0.01, 3),
+          wallThickness: logUniform(5e-4, 0.1),
+        }),
+      ),
+    ),
+    call: api.restraintFactor,
+  },
+  {
+    name: 'waveSpeed',
+    valid: fc.tuple(
+      fc.oneof(
+        fc.record({ bulkModulus: logUniform(1e8, 3e9), density: uniform(500, 2000) }),
+        fc.record(
+          {
+            bulkModulus: logUniform(1e8, 3e9),
+            density: uniform(500, 2000),
+            insideDiameter: logUniform(0.01, 3),
+            wallThickness: logUniform(5e-4, 0.1),
+            elasticModulus: logUniform(5e8, 2.2e11),
+            anchoring: fc.constantFrom(...api.PIPE_ANCHORINGS),
+            poissonRatio: uniform(0, 0.5),
+            wall: fc.constantFrom('thin' as const, 'thick' as const),
+          },
+          {
+            requiredKeys: [
+              'bulkModulus',
+              'density',
+              'insideDiameter',
+              'wallThickness',
+              'elasticModulus',
+              'anchoring',
+              'poissonRatio',
+            ],
+          },
+        ),
+        fc.record({
+          bulkModulus: logUniform(1e8, 3e9),
+          density: uniform(500, 2000),
+          insideDiameter: logUniform(0.01, 3),
+          wallThickness: logUniform(5e-4, 0.1),
+          elasticModulus: logUniform(5e8, 2.2e11),
+          restraintFactor: uniform(0.5, 1.5),
+        }),
+      ),
+    ),
+    call: api.waveSpeed,
+  },
 ];
