@@ -239,25 +239,49 @@ export interface MaxResult {
 }
 
 /**
- * Largest value of f on [a, b]: a scan of `grid` equal steps, then golden-section search
- * between the neighbours of the best grid point (bounded: at most 200 steps). Finds the
- * global maximum of curves with one hump per grid step, which catalogue curves are.
+ * Largest value of f on [a, b]: a scan of `grid` equal steps and of the `seeds` (flows where a
+ * hump is known to be, such as the catalogue points, so that a hump narrower than a grid step
+ * is not missed), then golden-section search around the best of them (bounded: at most 200
+ * steps). Finds the global maximum of curves with one hump per grid step or per seed.
  */
-export function maximize(f: (x: number) => number, a: number, b: number, grid = 128): MaxResult {
-  let best = 0;
+export function maximize(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  grid = 128,
+  seeds: ArrayLike<number> = [],
+): MaxResult {
+  let bestX = a;
   let bestV = Number.NEGATIVE_INFINITY;
   let evaluations = 0;
   const h = (b - a) / grid;
   for (let i = 0; i <= grid; i++) {
-    const v = f(i === grid ? b : a + i * h);
+    const x = i === grid ? b : a + i * h;
+    const v = f(x);
     evaluations++;
     if (v > bestV) {
       bestV = v;
-      best = i;
+      bestX = x;
     }
   }
-  let lo = Math.max(a, a + (best - 1) * h);
-  let hi = Math.min(b, a + (best + 1) * h);
+  for (let i = 0; i < seeds.length; i++) {
+    const x = seeds[i] as number;
+    if (!(x >= a && x <= b)) continue;
+    const v = f(x);
+    evaluations++;
+    if (v > bestV) {
+      bestV = v;
+      bestX = x;
+    }
+  }
+  // The neighbours of the best point: a grid step either side, or the nearest seeds if closer.
+  let lo = Math.max(a, bestX - h);
+  let hi = Math.min(b, bestX + h);
+  for (let i = 0; i < seeds.length; i++) {
+    const x = seeds[i] as number;
+    if (x < bestX && x > lo) lo = x;
+    if (x > bestX && x < hi) hi = x;
+  }
   const r = (Math.sqrt(5) - 1) / 2;
   let x1 = hi - r * (hi - lo);
   let x2 = lo + r * (hi - lo);
@@ -284,8 +308,7 @@ export function maximize(f: (x: number) => number, a: number, b: number, grid = 
   const xm = 0.5 * (lo + hi);
   const vm = f(xm);
   evaluations++;
-  const gridX = best === grid ? b : a + best * h;
-  return vm >= bestV ? { x: xm, value: vm, evaluations } : { x: gridX, value: bestV, evaluations };
+  return vm >= bestV ? { x: xm, value: vm, evaluations } : { x: bestX, value: bestV, evaluations };
 }
 
 /**

@@ -493,7 +493,8 @@ function buildBase(input: PumpCurveInput): Base {
   let bep: BestEfficiencyPoint | undefined;
   if (effFn !== undefined) {
     const f = effFn;
-    const m = maximize(f, xMin, last);
+    // The catalogue flows seed the search: a hump narrower than a grid step is not missed.
+    const m = maximize(f, xMin, last, 128, q);
     bep = { flow: m.x as Flow, head: head.evaluate(m.x) as Length, efficiency: m.value };
   }
   const preferred = checkRegion(

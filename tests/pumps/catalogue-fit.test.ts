@@ -209,3 +209,28 @@ describe('property: the default fit honours the bounds for any monotone catalogu
     );
   });
 });
+
+describe('the BEP search does not miss a hump narrower than its grid step', () => {
+  it('two humps: the BEP lies on the higher one (a fast-check counterexample)', () => {
+    // Flows in m3/s, as the property drew them; the second hump spans 2.8e-5 m3/s of a
+    // 1e-3 m3/s range, narrower than the search's 128-step grid.
+    const flows = [
+      0.0002777777777777778, 0.0005304905790584182, 0.0007820530637662813, 0.0009862907345400854,
+      0.0012350829492891885, 0.0012489718381780773, 0.001262860727066966, 0.0012767496159558549,
+    ];
+    const eff = [
+      0.056385451406658425, 0.9123464370510411, 0.05, 0.05, 0.05, 0.05, 0.9173464380510412, 0.05,
+    ];
+    const pump = pumpCurve({
+      speed: rpm,
+      points: flows.map((f, i) => ({
+        flow: f as Flow,
+        head: q(5, 'm'),
+        efficiency: eff[i] as number,
+      })),
+    });
+    expect(pump.bestEfficiencyPoint?.efficiency ?? 0).toBeGreaterThanOrEqual(
+      0.9173464380510412 - CATALOGUE_FIT_TOLERANCE.efficiency,
+    );
+  });
+});
