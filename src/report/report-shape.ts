@@ -89,6 +89,66 @@ const RUN_DETAILS = rec({
   elevationChange: num,
 });
 
+/** The node and link tables of a network at one solution. */
+const NETWORK_TABLES = (optional: boolean): Shape =>
+  rec(
+    {
+      pumpLink: str,
+      duty: oneOf(['flow', 'service']),
+      nodes: list(
+        rec({
+          id: str,
+          kind: oneOf(['junction', 'surface', 'outlet']),
+          elevation: num,
+          head: num,
+          pressure: num,
+          outflow: num,
+          minPressure: num,
+          shortfall: num,
+          isolated: bool,
+        }),
+      ),
+      links: list(
+        rec({
+          id: str,
+          kind: oneOf(['run', 'pump', 'valve']),
+          from: str,
+          to: str,
+          flow: num,
+          velocity: num,
+          headLoss: num,
+          reynolds: num,
+          frictionFactor: num,
+          state: oneOf(['open', 'closed', 'shut', 'active', 'pinned']),
+        }),
+      ),
+      iterations: num,
+      headResidual: num,
+      flowResidual: num,
+      searchSolves: num,
+    },
+    optional,
+  );
+
+/** A network's layout as a report restates it. */
+const NETWORK_LAYOUT = rec(
+  {
+    pumpLink: str,
+    nodes: list(
+      rec({
+        id: str,
+        kind: oneOf(['junction', 'surface', 'outlet']),
+        elevation: num,
+        x: num,
+        y: num,
+      }),
+    ),
+    links: list(rec({ id: str, kind: oneOf(['run', 'pump', 'valve']), from: str, to: str })),
+    service: list(rec({ node: str, minPressure: num })),
+  },
+  true,
+);
+
 const DUTY = rec({
   case: str,
   fluid: rec(FLUID_FIELDS),
@@ -114,6 +174,7 @@ const DUTY = rec({
   suctionPressure: num,
   dischargePressure: num,
   runs: list(RUN_DETAILS),
+  network: rec({ dutyFlow: num, tables: NETWORK_TABLES(false) }, true),
 });
 
 const CASE_RESULT = rec({
@@ -133,6 +194,7 @@ const CASE_RESULT = rec({
   inputPower: num,
   specificEnergy: num,
   iterations: num,
+  network: NETWORK_TABLES(true),
 });
 
 const MOTOR = (optional: boolean): Shape =>
@@ -259,6 +321,7 @@ const REPORT: Fields = {
   cautions: list({ t: 'string' }),
   passed: bool,
   curves: CURVES,
+  network: NETWORK_LAYOUT,
 };
 
 /** Checks `value` at `path` against `shape`, throwing `INVALID_ARGUMENT` naming the field. */

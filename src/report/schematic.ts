@@ -17,6 +17,7 @@ import type { Pressure } from '../units/index';
 import { type Box, DESCENT, placeNear, textBox, textWidth } from './chart-text';
 import { escapeXml, fmt } from './chart-xml';
 import { chosenUnits, formatIn } from './format-values';
+import { checkReportShape } from './report-shape';
 
 /** Options of {@link renderSchematic}. */
 export interface SchematicOptions {
@@ -135,7 +136,8 @@ export function renderSchematic(
   report: DesignReport,
   options: SchematicOptions | null = {},
 ): string {
-  const r = guardRecord('report', report) as unknown as DesignReport;
+  checkReportShape(report);
+  const r = report;
   const o = guardOptions<SchematicOptions>('options', options);
   const layout = r.network;
   if (layout === undefined) {

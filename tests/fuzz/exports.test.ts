@@ -10,6 +10,7 @@ import { basicEntries } from './entries/basics';
 import { documentEntries } from './entries/documents';
 import { machineEntries } from './entries/machines';
 import { networkEntries } from './entries/network';
+import { networkDesignEntries } from './entries/network-design';
 import { selectionEntries } from './entries/selection';
 import { sizeChartEntries } from './entries/size-chart';
 import { FUZZ_RUNS } from './harness';
@@ -19,6 +20,7 @@ const ENTRIES = [
   ...machineEntries,
   ...documentEntries,
   ...networkEntries,
+  ...networkDesignEntries,
   ...selectionEntries,
   ...sizeChartEntries,
 ];
