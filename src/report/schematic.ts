@@ -12,7 +12,7 @@
 import type { DesignReport, NetworkLayout, NetworkTables, UnitSystem } from '../design/core';
 import { type Say, sayIn } from '../design/say';
 import { argumentError } from '../errors';
-import { guardInteger, guardOneOf, guardOptions, guardRecord, guardString } from '../guards';
+import { guardInteger, guardOneOf, guardOptions, guardString } from '../guards';
 import type { Pressure } from '../units/index';
 import { type Box, DESCENT, placeNear, textBox, textWidth } from './chart-text';
 import { escapeXml, fmt } from './chart-xml';

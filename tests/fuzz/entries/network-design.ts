@@ -18,15 +18,17 @@ const FILES = ['booster-floors', 'ring-main'].map(
 );
 
 /** A network file: an example with its node elevations shifted by up to a metre (whole mm). */
-const file = fc.tuple(fc.integer({ min: 0, max: 1 }), fc.integer({ min: -1000, max: 1000 })).map(([i, mm]) => {
-  const shift = mm / 1000;
-  const f = structuredClone(FILES[i] as Record<string, unknown>);
-  for (const node of f['nodes'] as { elevation: string }[]) {
-    const [value, ...unit] = node.elevation.split(' ');
-    node.elevation = `${Number(value) + shift} ${unit.join(' ')}`;
-  }
-  return f;
-});
+const file = fc
+  .tuple(fc.integer({ min: 0, max: 1 }), fc.integer({ min: -1000, max: 1000 }))
+  .map(([i, mm]) => {
+    const shift = mm / 1000;
+    const f = structuredClone(FILES[i] as Record<string, unknown>);
+    for (const node of f['nodes'] as { elevation: string }[]) {
+      const [value, ...unit] = node.elevation.split(' ');
+      node.elevation = `${Number(value) + shift} ${unit.join(' ')}`;
+    }
+    return f;
+  });
 
 const REPORTS: readonly DesignReport[] = FILES.map((f) =>
   api.evaluateDesign(api.readDesignFile(f)),
