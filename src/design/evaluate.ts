@@ -819,9 +819,12 @@ export function finishCandidate(
     };
   } catch (e) {
     message(e);
-    const perPumpFlow =
-      e instanceof HeadflowError && typeof e.value === 'number' ? e.value : Number.NaN;
-    checks.push(energyCheck(c.name, design.name, c.setFlow(perPumpFlow), c.control));
+    // The flow the energy sum failed at, when the error names it; else the profile's largest.
+    const failedAt =
+      e instanceof HeadflowError && typeof e.value === 'number' && Number.isFinite(e.value)
+        ? c.setFlow(e.value)
+        : profile.reduce((m, r) => Math.max(m, r.flow), 0);
+    checks.push(energyCheck(c.name, design.name, failedAt, c.control));
   }
   const shutoff = fullSpeed.shutoffHead ?? fullSpeed.head(fullSpeed.flowRange.min);
   const setShutoff = c.setHead(shutoff);

@@ -42,6 +42,21 @@ export function checkDesignShape(input: DesignInput): void {
     guardRecord(`system.runs[${i}]`, run);
   }
   if (input.fluidName !== undefined) guardString('fluidName', input.fluidName);
+  checkSharedShape(input);
+}
+
+/**
+ * The parts a line and a network design share: name, cases (a list), candidates, duty
+ * profile, energy price, limits and units. Throws as {@link checkDesignShape}.
+ */
+export function checkSharedShape(
+  input: Pick<
+    DesignInput,
+    'name' | 'candidates' | 'profile' | 'energyPrice' | 'limits' | 'units' | 'pumpLocation'
+  > & { readonly cases?: readonly unknown[] | undefined },
+): void {
+  guardRecord('input', input);
+  guardString('name', input.name);
   if (input.cases !== undefined) guardArray('cases', input.cases, { max: MAX_ITEMS });
   if (input.pumpLocation !== undefined) {
     guardNumber(

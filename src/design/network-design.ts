@@ -66,6 +66,7 @@ import {
   resolveProfile,
   sample,
 } from './evaluate';
+import { checkSharedShape } from './input-shape';
 import type {
   CandidateReport,
   CaseDuty,
@@ -228,8 +229,14 @@ function linkKind(l: NetworkLink): LinkRow['kind'] {
 function checkParts(input: NetworkDesignInput, candidates: readonly Candidate[]): Parts {
   const def = guardRecord('network', input.network) as unknown as NetworkDefinition;
   const pumpLink = guardString('pumpLink', input.pumpLink);
-  const links = guardArray('network.links', def.links) as readonly NetworkLink[];
-  const nodeList = guardArray('network.nodes', def.nodes) as readonly NetworkNode[];
+  // Every node and link is an object: the solver's own checks come later, after this code
+  // has read them (a Symbol or a number in the list must not reach an `in` test).
+  const links = guardArray('network.links', def.links).map((l, i) =>
+    guardRecord(`network.links[${i}]`, l),
+  ) as unknown as readonly NetworkLink[];
+  const nodeList = guardArray('network.nodes', def.nodes).map((n, i) =>
+    guardRecord(`network.nodes[${i}]`, n),
+  ) as unknown as readonly NetworkNode[];
   const nodes = new Map<string, NetworkNode>();
   for (const n of nodeList) {
     if (typeof n === 'object' && n !== null && typeof n.id === 'string') nodes.set(n.id, n);
@@ -1010,7 +1017,7 @@ export function evaluateNetworkDesign(
 ): DesignReport {
   const o = guardOptions<EvaluateOptions>('options', options);
   const wantCurves = o.curves === undefined ? false : guardBoolean('options.curves', o.curves);
-  guardRecord('input', input);
+  checkSharedShape(input);
   const units = input.units ?? 'si';
   if (units !== 'si' && units !== 'us') {
     throw argumentError('INVALID_ARGUMENT', 'units', units, undefined, "'si' or 'us'");
