@@ -888,6 +888,64 @@ export function sample(
   };
 }
 
+/** Where {@link sampleCandidate} writes a candidate's full-speed curves. */
+export interface CandidateCurves {
+  readonly pumps: SampledCurve[];
+  readonly efficiency: SampledCurve[];
+  readonly npshRequired: SampledCurve[];
+  readonly preferredRegions: { name: string; group: string; minFlow: number; maxFlow: number }[];
+}
+
+/**
+ * Samples a candidate set at its highest speed for a chart: head, efficiency and NPSH required
+ * against the set's flow, and its preferred region. Shared by lines and networks.
+ */
+export function sampleCandidate(c: Candidate, out: CandidateCurves): void {
+  const { pumps, efficiency, npshRequired, preferredRegions } = out;
+  const full = c.fullSpeed;
+  const label = c.label;
+  const { min, max } = full.flowRange;
+  pumps.push(
+    sample(
+      label,
+      c.setFlow(min),
+      c.setFlow(max),
+      (q) => c.setHead(full.head(c.pumpFlow(q) as Flow)),
+      label,
+      { speed: full.speed, max: true },
+    ),
+  );
+  efficiency.push(
+    sample(
+      label,
+      c.setFlow(min),
+      c.setFlow(max),
+      (q) => full.efficiency(c.pumpFlow(q) as Flow),
+      label,
+    ),
+  );
+  if (full.npshRange !== undefined) {
+    const r = full.npshRange;
+    npshRequired.push(
+      sample(
+        label,
+        c.setFlow(r.min),
+        c.setFlow(r.max),
+        (q) => full.npshRequired(c.pumpFlow(q) as Flow),
+        label,
+      ),
+    );
+  }
+  if (full.preferredRegion !== undefined) {
+    preferredRegions.push({
+      name: label,
+      group: label,
+      minFlow: c.setFlow(full.preferredRegion.min),
+      maxFlow: c.setFlow(full.preferredRegion.max),
+    });
+  }
+}
+
 function curvesOf(
   input: DesignInput,
   candidates: readonly Candidate[],
@@ -905,46 +963,7 @@ function curvesOf(
   candidates.forEach((c, i) => {
     const full = c.fullSpeed;
     const label = c.label;
-    const { min, max } = full.flowRange;
-    pumps.push(
-      sample(
-        label,
-        c.setFlow(min),
-        c.setFlow(max),
-        (q) => c.setHead(full.head(c.pumpFlow(q) as Flow)),
-        label,
-        { speed: full.speed, max: true },
-      ),
-    );
-    efficiency.push(
-      sample(
-        label,
-        c.setFlow(min),
-        c.setFlow(max),
-        (q) => full.efficiency(c.pumpFlow(q) as Flow),
-        label,
-      ),
-    );
-    if (full.npshRange !== undefined) {
-      const r = full.npshRange;
-      npshRequired.push(
-        sample(
-          label,
-          c.setFlow(r.min),
-          c.setFlow(r.max),
-          (q) => full.npshRequired(c.pumpFlow(q) as Flow),
-          label,
-        ),
-      );
-    }
-    if (full.preferredRegion !== undefined) {
-      preferredRegions.push({
-        name: label,
-        group: label,
-        minFlow: c.setFlow(full.preferredRegion.min),
-        maxFlow: c.setFlow(full.preferredRegion.max),
-      });
-    }
+    sampleCandidate(c, { pumps, efficiency, npshRequired, preferredRegions });
     const report = reports[i];
     const speeds = new Set<number>();
     for (const r of report?.cases ?? []) {

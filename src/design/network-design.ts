@@ -64,7 +64,7 @@ import {
   resolveCandidates,
   resolveLimits,
   resolveProfile,
-  sample,
+  sampleCandidate,
 } from './evaluate';
 import { checkSharedShape } from './input-shape';
 import type {
@@ -913,48 +913,7 @@ function curvesOf(
   const npshRequired: SampledCurve[] = [];
   const preferredRegions: { name: string; group: string; minFlow: number; maxFlow: number }[] = [];
   for (const c of candidates) {
-    const full = c.fullSpeed;
-    const { min, max } = full.flowRange;
-    const label = c.label;
-    pumps.push(
-      sample(
-        label,
-        c.setFlow(min),
-        c.setFlow(max),
-        (q) => c.setHead(full.head(c.pumpFlow(q) as Flow)),
-        label,
-        { speed: full.speed, max: true },
-      ),
-    );
-    efficiency.push(
-      sample(
-        label,
-        c.setFlow(min),
-        c.setFlow(max),
-        (q) => full.efficiency(c.pumpFlow(q) as Flow),
-        label,
-      ),
-    );
-    if (full.npshRange !== undefined) {
-      const r = full.npshRange;
-      npshRequired.push(
-        sample(
-          label,
-          c.setFlow(r.min),
-          c.setFlow(r.max),
-          (q) => full.npshRequired(c.pumpFlow(q) as Flow),
-          label,
-        ),
-      );
-    }
-    if (full.preferredRegion !== undefined) {
-      preferredRegions.push({
-        name: label,
-        group: label,
-        minFlow: c.setFlow(full.preferredRegion.min),
-        maxFlow: c.setFlow(full.preferredRegion.max),
-      });
-    }
+    sampleCandidate(c, { pumps, efficiency, npshRequired, preferredRegions });
   }
   const points = reports.flatMap((r) =>
     r.cases
