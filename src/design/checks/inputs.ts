@@ -4,7 +4,8 @@
  *
  * @module
  */
-import { guardRange, guardRecord } from '../../guards';
+import { argumentError } from '../../errors';
+import { guardBoolean, guardFunction, guardRange, guardRecord } from '../../guards';
 import type { DesignInput } from '../types';
 
 const positive = { min: 0, minOpen: true } as const;
@@ -24,6 +25,17 @@ export function guardCheckInputs(input: DesignInput): void {
     }
     if (l['maxTemperatureRise'] !== undefined) {
       guardRange('lowFlow.maxTemperatureRise', l['maxTemperatureRise'], { ...positive, unit: 'K' });
+    }
+  }
+  if (input.liquid !== undefined) {
+    // The liquid itself (for the margin to boiling): its vapour pressure is read directly.
+    const f = guardRecord('liquid', input.liquid);
+    guardBoolean('liquid.hasVaporPressure', f['hasVaporPressure']);
+    guardFunction('liquid.vaporPressureInto', f['vaporPressureInto']);
+    // An open upper end (Infinity, as a constant fluid has) is allowed; NaN or a non-number not.
+    const top = guardRecord('liquid.validRange', f['validRange'])['maxTemperature'];
+    if (typeof top !== 'number' || !(top > 0)) {
+      throw argumentError('INVALID_ARGUMENT', 'liquid.validRange.maxTemperature', top, 'K', '> 0');
     }
   }
   if (input.intake !== undefined && input.intake !== null) {

@@ -57,6 +57,10 @@ export const networkDesignEntries: readonly FuzzEntry[] = [
     name: 'evaluateDesign',
     valid: file.map((f) => [api.readDesignFile(f)]),
     call: api.evaluateDesign,
+    // Known limit, left open: with pressure-dependent outlets the solver can stop at its
+    // iteration cap on a valid layout (the booster with its floors shifted by a few hundred
+    // mm); it says so with NO_SOLUTION and the last residuals, never a hang or a NaN.
+    validMayThrow: ['NO_SOLUTION'],
     runs: 40,
   },
   {
