@@ -4,8 +4,8 @@
  *
  * Source: J. B. Evett and C. Liu, "2500 Solved Problems in Fluid Mechanics and Hydraulics"
  * (Schaum's Solved Problems Series, McGraw-Hill, 1989), chapter 11 "Parallel Pipeline
- * Systems", problem 11.1 (read from the transcription at
- * https://html.pdfcookie.com/02/2020/01/13/x20gp5x583l3/x20gp5x583l3.html). Data: pressure
+ * Systems", problem 11.1 (read from a copy of the text found online, not from the printed
+ * book: check against the print before relying on it). Data: pressure
  * heads 70.0 m at A and 46.0 m at E; pipe ABE 3000 m of 300 mm, pipe ACE 1300 m of 200 mm,
  * pipe ADE 2600 m of 250 mm, C = 120 for all pipes. Published flows (from the chart, Fig.
  * A-14): ABE 0.105 m3/s, ACE 0.056 m3/s, ADE 0.070 m3/s.
