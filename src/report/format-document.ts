@@ -264,6 +264,16 @@ function dutyTable(report: DesignReport, s: Say): Block {
   };
 }
 
+/**
+ * The regime of a run, with the friction law where the run states one instead of the
+ * friction policy: `turbulent (Hazen-Williams C 130)`, `turbulent (stated f 0.02)`.
+ */
+function regimeCell(r: DesignReport['duty'][number]['runs'][number]): string {
+  if (r.law === 'hazen-williams') return `${r.regime} (Hazen-Williams C ${r.lawValue ?? '?'})`;
+  if (r.law === 'constant-factor') return `${r.regime} (stated f ${r.lawValue ?? '?'})`;
+  return r.regime;
+}
+
 function runLossTable(report: DesignReport, k: number, s: Say): Block {
   const u = s.units;
   const d = report.duty[k];
@@ -286,7 +296,7 @@ function runLossTable(report: DesignReport, k: number, s: Say): Block {
       formatIn(r.flow, u.flow),
       formatIn(r.velocity, u.velocity),
       formatGrouped(r.reynolds),
-      r.regime,
+      regimeCell(r),
       formatFixed(r.frictionFactor, 4),
       formatIn(r.pipeLoss, u.head),
       formatIn(r.fittingsLoss, u.head),
