@@ -562,18 +562,10 @@ export function pointAt(
   return { head, efficiency, shaftPower, percentOfBep, region, npshr, npshRatio };
 }
 
-/** One candidate in one case: where it runs and the checks there. */
-function runCase(
-  input: DesignInput,
-  c: Candidate,
-  s: ScenarioCurve,
-  limits: Limits,
-  checks: Check[],
-): CaseResult {
-  const fluid = s.curve.definition.fluid;
-  const system = perPump(c, s.curve);
-  const empty = {
-    case: s.name,
+/** A case where a set has no operating point: every figure absent (the failure is added). */
+export function emptyCase(name: string): Omit<CaseResult, 'failure'> {
+  return {
+    case: name,
     speed: undefined,
     flow: undefined,
     head: undefined,
@@ -588,7 +580,20 @@ function runCase(
     inputPower: undefined,
     specificEnergy: undefined,
     iterations: 0,
-  } as const;
+  };
+}
+
+/** One candidate in one case: where it runs and the checks there. */
+function runCase(
+  input: DesignInput,
+  c: Candidate,
+  s: ScenarioCurve,
+  limits: Limits,
+  checks: Check[],
+): CaseResult {
+  const fluid = s.curve.definition.fluid;
+  const system = perPump(c, s.curve);
+  const empty = emptyCase(s.name);
   let pump: PumpCurve = c.pump;
   let q: number;
   let iterations = 0;

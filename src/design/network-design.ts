@@ -58,6 +58,7 @@ import {
 } from './checks/index';
 import { serviceChecks } from './checks/service-pressure';
 import {
+  emptyCase,
   finishCandidate,
   message,
   pointAt,
@@ -689,23 +690,7 @@ function runCase(
   limits: Limits,
   checks: Check[],
 ): CaseResult {
-  const empty = {
-    case: ctx.name,
-    speed: undefined,
-    flow: undefined,
-    head: undefined,
-    efficiency: undefined,
-    shaftPower: undefined,
-    percentOfBep: undefined,
-    region: undefined,
-    npshAvailable: undefined,
-    npshRequired: undefined,
-    npshRatio: undefined,
-    velocities: [],
-    inputPower: undefined,
-    specificEnergy: undefined,
-    iterations: 0,
-  } as const;
+  const empty = emptyCase(ctx.name);
   const noPoint = (values: Record<string, number>, words: Record<string, string>): CaseResult => {
     const k = check('no-operating-point', 'error', c.name, ctx.name, values, COMMON, words);
     checks.push(k);
